@@ -1,0 +1,11 @@
+import { z } from "zod";
+import { publicUserSchema } from "./users.ts";
+
+export const signInRequestSchema = z.object({
+  email: z.email({ error: "Enter your e-mail address, for example name@shop.example." }).max(254).transform((s) => s.trim().toLowerCase()),
+  password: z.string().min(1, { error: "Enter your password." }).max(200, { error: "That password is too long." }),
+});
+export type SignInRequest = z.input<typeof signInRequestSchema>;
+
+export const meResponseSchema = z.object({ user: publicUserSchema, shop: z.object({ name: z.string() }) });
+export type MeResponse = z.infer<typeof meResponseSchema>;
