@@ -2,7 +2,11 @@ import { z } from "zod";
 import { publicUserSchema } from "./users.ts";
 
 export const signInRequestSchema = z.object({
-  email: z.email({ error: "Enter your e-mail address, for example name@shop.example." }).max(254).transform((s) => s.trim().toLowerCase()),
+  email: z
+    .string({ error: "Enter your e-mail address." })
+    .trim()
+    .toLowerCase()
+    .pipe(z.email({ error: "Enter your e-mail address, for example name@shop.example." }).max(254)),
   password: z.string().min(1, { error: "Enter your password." }).max(200, { error: "That password is too long." }),
 });
 export type SignInRequest = z.input<typeof signInRequestSchema>;
