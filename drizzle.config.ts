@@ -4,5 +4,4 @@ export default defineConfig({
   dialect: "postgresql",
   schema: "./server/db/schema.ts",
   out: "./drizzle",
-  casing: "snake_case",
 });

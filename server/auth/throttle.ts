@@ -1,0 +1,33 @@
+import type { Request, RequestHandler } from "express";
+import { rateLimit, type RateLimitInfo } from "express-rate-limit";
+import { tooManyRequests } from "../lib/errors.ts";
+
+const WINDOW_MS = 10 * 60 * 1000;
+
+function blocked(req: Request): never {
+  const info = (req as Request & { rateLimit?: RateLimitInfo }).rateLimit;
+  const reset = info?.resetTime?.getTime() ?? Date.now() + WINDOW_MS;
+  const seconds = Math.max(1, Math.ceil((reset - Date.now()) / 1000));
+  throw tooManyRequests(seconds, `Too many failed sign-ins. Try again in ${Math.ceil(seconds / 60)} minutes.`);
+}
+
+/**
+ * Failed sign-ins are counted per address and per account (10 failures block that account for
+ * 10 minutes); a success does not count.
+ */
+export function signInThrottle(): RequestHandler[] {
+  const common = {
+    windowMs: WINDOW_MS,
+    skipSuccessfulRequests: true,
+    standardHeaders: false,
+    legacyHeaders: false,
+    handler: (req: Request) => blocked(req),
+  } as const;
+  const perAddress = rateLimit({ ...common, limit: 30 });
+  const perAccount = rateLimit({
+    ...common,
+    limit: 10,
+    keyGenerator: (req) => `account:${String((req.body as { email?: unknown } | undefined)?.email ?? "").trim().toLowerCase()}`,
+  });
+  return [perAddress, perAccount];
+}

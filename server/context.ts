@@ -1,0 +1,17 @@
+import type { Database } from "./db/client.ts";
+import type { Env } from "./env.ts";
+import type { Logger } from "./lib/logger.ts";
+import { createLucia, type AppLucia } from "./auth/lucia.ts";
+
+/** What every route and service needs, built once per app. */
+export interface AppContext {
+  db: Database;
+  env: Env;
+  logger: Logger;
+  lucia: AppLucia;
+  health: () => Promise<{ kind: string; ok: boolean; latencyMs: number | null; error?: string }>;
+}
+
+export function createContext(parts: Omit<AppContext, "lucia">): AppContext {
+  return { ...parts, lucia: createLucia(parts.db) };
+}

@@ -1,0 +1,57 @@
+import { count, getTableName, is, sql } from "drizzle-orm";
+import { PgTable } from "drizzle-orm/pg-core";
+import { v7 as uuidv7 } from "uuid";
+import type { Database } from "../client.ts";
+import * as schema from "../schema.ts";
+import { hashPassword } from "../../auth/password.ts";
+import { recordAudit } from "../../services/audit.ts";
+import type { Role } from "../../../shared/schemas/users.ts";
+
+/** The demo scenario: an invented shop and its people. Nothing here is a real business or person. */
+export const demoShop = {
+  name: "Kettle Creek Mower & Saw",
+  phone: "555-0142",
+  email: "desk@kettlecreek.example",
+  address: "14 Mill Race Road, Kettle Creek",
+  labourRateCents: 8500,
+  diagnosticFeeCents: 4500,
+  creditDiagnosticFee: true,
+  taxRateBasisPoints: 725,
+  currency: "USD",
+  defaultUnitSystem: "imperial" as const,
+  altitudeM: 410,
+};
+
+export const demoUsers: { email: string; name: string; role: Role; password: string }[] = [
+  { email: "apprentice@kettlecreek.example", name: "Robin Ashdown", role: "apprentice", password: "bench-apprentice" },
+  { email: "senior@kettlecreek.example", name: "Wes Tannery", role: "senior_tech", password: "bench-senior-tech" },
+  { email: "lead@kettlecreek.example", name: "June Halloway", role: "shop_lead", password: "bench-shop-lead" },
+];
+
+export async function isEmpty(db: Database): Promise<boolean> {
+  const [row] = await db.select({ n: count() }).from(schema.users);
+  return (row?.n ?? 0) === 0;
+}
+
+export async function seedDemo(db: Database): Promise<void> {
+  const hashes = await Promise.all(demoUsers.map((u) => hashPassword(u.password)));
+  await db.transaction(async (tx) => {
+    await tx.insert(schema.shopSettings).values({ id: 1, ...demoShop });
+    await tx.insert(schema.users).values(
+      demoUsers.map((u, i) => ({ id: uuidv7(), email: u.email, name: u.name, role: u.role, unitSystem: demoShop.defaultUnitSystem, passwordHash: hashes[i]! })),
+    );
+    await recordAudit(tx, { userId: null, action: "demo.seeded", recordType: "shop", recordId: "1" });
+  });
+}
+
+/** Empties every table, then seeds the demo again. */
+export async function resetDemo(db: Database): Promise<void> {
+  const tables = (Object.values(schema) as unknown[]).filter((value): value is PgTable => is(value, PgTable));
+  const names = tables.map((t) => `"${getTableName(t)}"`).join(", ");
+  await db.execute(sql.raw(`TRUNCATE ${names} CASCADE`));
+  await seedDemo(db);
+}
+
+export function demoSignInLines(): string[] {
+  return demoUsers.map((u) => `  ${u.role.padEnd(12)} ${u.email.padEnd(32)} password: ${u.password}`);
+}

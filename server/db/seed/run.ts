@@ -1,0 +1,24 @@
+import { loadEnv, EnvError } from "../../env.ts";
+import { openStore } from "../open.ts";
+import { DataFolderLockedError } from "../lock.ts";
+import { demoShop, demoSignInLines, resetDemo } from "./demo.ts";
+
+// `npm run seed`: empties the database and puts the demo shop back.
+try {
+  const env = loadEnv();
+  const store = await openStore(env);
+  try {
+    await resetDemo(store.handle.db);
+    await store.handle.checkpoint();
+  } finally {
+    await store.handle.close();
+    store.release();
+  }
+  process.stdout.write(`Demo data reset at ${store.handle.location}: ${demoShop.name}. Sign-ins:\n${demoSignInLines().join("\n")}\n`);
+} catch (error) {
+  if (error instanceof EnvError || error instanceof DataFolderLockedError) {
+    process.stderr.write(`${error.message}\n`);
+    process.exit(1);
+  }
+  throw error;
+}

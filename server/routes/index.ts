@@ -1,0 +1,33 @@
+import type { Router } from "express";
+import type { AppContext } from "../context.ts";
+import { authRouter } from "./auth/router.ts";
+import { healthRouter } from "./health/router.ts";
+
+export interface ApiResource {
+  base: string;
+  router: Router;
+}
+
+/** Every API resource and where it is mounted; the access-matrix test reads the routes from here. */
+export function apiResources(ctx: AppContext): ApiResource[] {
+  return [
+    { base: "/api/health", router: healthRouter(ctx) },
+    { base: "/api/auth", router: authRouter(ctx) },
+  ];
+}
+
+interface RouteLayer {
+  route?: { path: string; methods: Record<string, boolean> };
+}
+
+export function listRoutes(resources: ApiResource[]): { method: string; path: string }[] {
+  return resources.flatMap(({ base, router }) =>
+    (router.stack as RouteLayer[])
+      .filter((layer) => layer.route)
+      .flatMap((layer) =>
+        Object.keys(layer.route!.methods)
+          .filter((m) => m !== "_all")
+          .map((m) => ({ method: m.toUpperCase(), path: (base + (layer.route!.path === "/" ? "" : layer.route!.path)) || "/" })),
+      ),
+  );
+}
