@@ -1,0 +1,173 @@
+// Analyses one flow or section document: schema, each step, then the graph in two linear passes.
+import type { z } from "zod";
+import { analyseGraph } from "./graph.ts";
+import { error, warning, type Problem } from "./problems.ts";
+import {
+  CONTINUE,
+  MAX_STEPS,
+  flowEnvelopeSchema,
+  flowStepSchema,
+  sectionEnvelopeSchema,
+  stepIdSchema,
+  type FlowStep,
+} from "./schema.ts";
+import { checkStep, rawTargetsOf, targetsOf } from "./validate-steps.ts";
+
+/** What a caller needs to know about a section: can it end in a finding, can it hand back. */
+export interface SectionSummary {
+  canFinish: boolean;
+  canContinue: boolean;
+}
+// Assumed for a section that is missing or broken, so its own problem is reported once, not echoed.
+const OPTIMISTIC: SectionSummary = { canFinish: true, canContinue: true };
+
+export interface DocAnalysis {
+  /** Problems of this document alone, by its own step ids. */
+  problems: Problem[];
+  /** The parsed envelope and steps, when every part parsed. */
+  envelope: Record<string, unknown> | null;
+  steps: Record<string, FlowStep> | null;
+  summary: SectionSummary;
+  calls: Array<{ stepId: string; section: string }>;
+}
+
+export interface AnalysisEnv {
+  lookup: (sectionId: string) => unknown;
+  done: Map<string, DocAnalysis>;
+  /** Sections being analysed, outermost first: meeting one again is a self-inclusion. */
+  stack: string[];
+}
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
+
+function formatPath(path: readonly PropertyKey[]): string {
+  return path.map((p, i) => (typeof p === "number" ? `[${p}]` : `${i === 0 ? "" : "."}${String(p)}`)).join("");
+}
+
+export function schemaProblems(stepId: string | null, issues: readonly z.core.$ZodIssue[]): Problem[] {
+  return issues.map((issue) => {
+    const where = formatPath(issue.path);
+    return error(stepId, "schema_invalid", where ? `${where}: ${issue.message}` : issue.message);
+  });
+}
+
+function summaryOf(sectionId: string, callerStepId: string, problems: Problem[], env: AnalysisEnv): SectionSummary {
+  const onStack = env.stack.indexOf(sectionId);
+  if (onStack >= 0) {
+    const chain = [...env.stack.slice(onStack), sectionId].map((s) => `"${s}"`).join(" → ");
+    problems.push(error(callerStepId, "section_cycle", `section "${sectionId}" includes itself: ${chain}`));
+    return OPTIMISTIC;
+  }
+  const cached = env.done.get(sectionId);
+  if (cached) return cached.summary;
+  const raw = env.lookup(sectionId);
+  if (raw === undefined) {
+    problems.push(error(callerStepId, "section_missing", `section "${sectionId}" is not in the section library`));
+    return OPTIMISTIC;
+  }
+  env.stack.push(sectionId);
+  const analysis = analyseDocument(raw, "section", env);
+  env.stack.pop();
+  env.done.set(sectionId, analysis);
+  return analysis.summary;
+}
+
+export function analyseDocument(raw: unknown, mode: "flow" | "section", env: AnalysisEnv): DocAnalysis {
+  const problems: Problem[] = [];
+  const calls: DocAnalysis["calls"] = [];
+  const broken = (): DocAnalysis => ({ problems, envelope: null, steps: null, summary: OPTIMISTIC, calls });
+  if (!isRecord(raw)) {
+    problems.push(error(null, "schema_invalid", `a ${mode} is a JSON object`));
+    return broken();
+  }
+  const envelope = (mode === "flow" ? flowEnvelopeSchema : sectionEnvelopeSchema).safeParse(raw);
+  if (!envelope.success) problems.push(...schemaProblems(null, envelope.error.issues));
+  const rawSteps = isRecord(raw.steps) ? raw.steps : {};
+  const ids = Object.keys(rawSteps);
+  if (ids.length > MAX_STEPS) {
+    problems.push(error(null, "too_many_steps", `a ${mode} has at most ${MAX_STEPS} steps; this one has ${ids.length}`));
+    return broken();
+  }
+
+  const index = new Map<string, number>();
+  ids.forEach((id, i) => index.set(id, i));
+  const parsed: Array<FlowStep | null> = [];
+  const edges: number[][] = [];
+  const exits: boolean[] = [];
+  const continues: boolean[] = [];
+  const finishes: boolean[] = [];
+  let allParsed = true;
+
+  ids.forEach((id) => {
+    if (!stepIdSchema.safeParse(id).success) {
+      problems.push(error(id, "step_id_invalid", `step id "${id}" must use lowercase letters, digits and single hyphens (at most 80 characters)`));
+    }
+    const result = flowStepSchema.safeParse(rawSteps[id]);
+    const step = result.success ? result.data : null;
+    if (result.success) problems.push(...checkStep(id, result.data));
+    else {
+      allParsed = false;
+      problems.push(...schemaProblems(id, result.error.issues));
+    }
+    parsed.push(step);
+    let exit = step === null || step.kind === "finding";
+    let finish = exit;
+    let followNext = true;
+    if (step?.kind === "section") {
+      calls.push({ stepId: id, section: step.section });
+      const summary = summaryOf(step.section, id, problems, env);
+      exit = exit || summary.canFinish;
+      finish = finish || summary.canFinish;
+      if (!summary.canContinue) {
+        followNext = false;
+        problems.push(warning(id, "section_never_continues", `section "${step.section}" always ends in a finding, so next "${step.next}" is never used`));
+      }
+    }
+    const out: number[] = [];
+    let continuesHere = step === null;
+    for (const { where, target } of step ? targetsOf(step) : rawTargetsOf(rawSteps[id])) {
+      if (target === CONTINUE) {
+        if (mode === "flow") problems.push(error(id, "continue_in_flow", `${where} is "${CONTINUE}", which only a section can use`));
+        exit = true;
+        continuesHere = true;
+        continue;
+      }
+      const to = index.get(target);
+      if (to === undefined) problems.push(error(id, "target_unknown", `${where} goes to "${target}", which is not a step`));
+      else if (followNext) out.push(to);
+    }
+    edges.push(out);
+    exits.push(exit);
+    continues.push(continuesHere);
+    finishes.push(finish);
+  });
+
+  const start = typeof raw.start === "string" ? index.get(raw.start) : undefined;
+  if (start === undefined) {
+    problems.push(error(null, "start_missing", `start ${typeof raw.start === "string" ? `"${raw.start}" is not a step` : "is missing"}`));
+  }
+  const { reached, canExit } = analyseGraph({ edges, exits }, start ?? null);
+  const stuck = mode === "flow" ? "no finding can be reached from this step (a loop needs a way out)" : `neither a finding nor "${CONTINUE}" can be reached from this step`;
+  let canFinish = start === undefined;
+  let canContinue = start === undefined;
+  ids.forEach((id, i) => {
+    if (start !== undefined && !reached[i]) problems.push(error(id, "step_unreachable", "no path from the start leads to this step"));
+    if (!canExit[i]) problems.push(error(id, "no_finding_reachable", stuck));
+    if (reached[i]) {
+      canFinish = canFinish || finishes[i]!;
+      canContinue = canContinue || continues[i]!;
+    }
+  });
+
+  const steps: Record<string, FlowStep> = {};
+  ids.forEach((id, i) => {
+    if (parsed[i]) steps[id] = parsed[i];
+  });
+  return {
+    problems,
+    envelope: envelope.success ? envelope.data : null,
+    steps: allParsed ? steps : null,
+    summary: { canFinish, canContinue },
+    calls,
+  };
+}
