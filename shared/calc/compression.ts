@@ -24,12 +24,14 @@ const RELEASE_4_STROKE = "a 4-stroke with a compression release";
 // The sources disagree (60–75 psi "ordinary" vs about 80 psi "marginal, may still start"): we keep
 // 60–75 as good and mark anything above it marginal (more than a working release lets through, so
 // not a failure but worth checking the release), which also keeps 80 psi marginal and never low.
-const releaseBands: readonly CompressionBand[] = [
-  { fromPsi: 0, verdict: "low", says: `below the 25 psi line where something is wrong for ${RELEASE_4_STROKE}` },
-  { fromPsi: 25, verdict: "marginal", says: `under the ordinary 60–75 psi for ${RELEASE_4_STROKE}, but not a failure: it may still start` },
-  { fromPsi: 60, verdict: "good", says: `within the ordinary 60–75 psi for ${RELEASE_4_STROKE}` },
-  { fromPsi: 76, verdict: "marginal", says: `above the ordinary 60–75 psi for ${RELEASE_4_STROKE}: not a failure and it may still start; if it pulls hard or kicks back, check the release` },
-];
+function releaseBands(engine: string): readonly CompressionBand[] {
+  return [
+    { fromPsi: 0, verdict: "low", says: `below the 25 psi line where something is wrong for ${engine}` },
+    { fromPsi: 25, verdict: "marginal", says: `under the ordinary 60–75 psi for ${engine}, but not a failure: it may still start` },
+    { fromPsi: 60, verdict: "good", says: `within the ordinary 60–75 psi for ${engine}` },
+    { fromPsi: 76, verdict: "marginal", says: `above the ordinary 60–75 psi for ${engine}; not a failure and it may still start, but if it kicks back, check the release` },
+  ];
+}
 
 /** Thresholds as data; each row names where its numbers come from. */
 export const compressionRules = {
@@ -46,12 +48,12 @@ export const compressionRules = {
   four_stroke_release: {
     id: "four_stroke_release",
     source: "60–75 psi and 25 psi: a general engine-testing guide (weak published source); about 80 psi marginal: common practice",
-    bands: releaseBands,
+    bands: releaseBands(RELEASE_4_STROKE),
   },
   four_stroke_release_unknown: {
     id: "four_stroke_release_unknown",
-    source: "as four_stroke_release; the release was not recorded, so one is assumed (most small 4-strokes have one)",
-    bands: releaseBands,
+    source: "as four_stroke_release; the release was not recorded, so it is treated as fitted and a healthy engine is not called low",
+    bands: releaseBands(`${RELEASE_4_STROKE} (assumed, as none was recorded)`),
   },
   four_stroke_no_release: {
     id: "four_stroke_no_release",
@@ -150,6 +152,5 @@ export function evaluateCompression(input: { gaugeKPa: number; altitudeM: number
   const rule = ruleFor(profile);
   const band = [...rule.bands].reverse().find((b) => shownPsi >= b.fromPsi) ?? rule.bands[0];
   if (!band) throw new Error(`Compression rule ${rule.id} has no bands.`);
-  const assumed = rule.id === "four_stroke_release_unknown" ? " (a release is assumed, as none was recorded)" : "";
-  return { verdict: band.verdict, reason: `${where}: ${band.says}${assumed}.`, ...values, rule: { id: rule.id, source: rule.source } };
+  return { verdict: band.verdict, reason: `${where}: ${band.says}.`, ...values, rule: { id: rule.id, source: rule.source } };
 }

@@ -3,7 +3,7 @@
 export const quantities = ["pressure", "resistance", "length", "voltage", "speed", "volume", "time", "temperature", "torque"] as const;
 export type Quantity = (typeof quantities)[number];
 
-export const unitsByQuantity = {
+const unitTable = {
   pressure: ["psi", "kPa", "bar"],
   resistance: ["ohm", "kohm"],
   length: ["in", "mm"],
@@ -15,7 +15,9 @@ export const unitsByQuantity = {
   torque: ["lbf_in", "lbf_ft", "N_m"],
 } as const satisfies Record<Quantity, readonly string[]>;
 
-export type Unit = (typeof unitsByQuantity)[Quantity][number];
+export type Unit = (typeof unitTable)[Quantity][number];
+
+export const unitsByQuantity: Record<Quantity, readonly Unit[]> = unitTable;
 
 export const canonicalUnit: Record<Quantity, Unit> = {
   pressure: "kPa",

@@ -80,7 +80,7 @@ describe("evaluateCompression", () => {
     const r = evaluateCompression({ gaugeKPa: kPa(80), altitudeM: 0, profile: releaseUnknown });
     expect(r.verdict).toBe("marginal");
     expect(r.rule.id).toBe("four_stroke_release_unknown");
-    expect(r.reason).toMatch(/^80 psi read at sea level: .*a release is assumed, as none was recorded\)\.$/);
+    expect(r.reason).toMatch(/^80 psi read at sea level: .*a compression release \(assumed, as none was recorded\);.*\.$/);
   });
 
   it("expects the full stroke without a release", () => {

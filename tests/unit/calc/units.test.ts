@@ -78,7 +78,7 @@ describe("convert", () => {
   it("round-trips every pair of units of one quantity", () => {
     fc.assert(
       fc.property(fc.constantFrom(...quantities), fc.double({ min: -1e4, max: 1e4, noNaN: true }), fc.nat(), fc.nat(), (q, v, i, j) => {
-        const units: readonly Unit[] = unitsByQuantity[q];
+        const units = unitsByQuantity[q];
         const a = units[i % units.length] as Unit;
         const b = units[j % units.length] as Unit;
         expect(convert(convert(v, a, b), b, a)).toBeCloseTo(v, 6);
