@@ -1,0 +1,80 @@
+import { useId, useState, type ReactNode } from "react";
+import { Button } from "./button.tsx";
+
+export type SignalWord = "danger" | "warning" | "caution" | "notice";
+
+type SafetyPanelProps = { title?: string; children: ReactNode } & (
+  | { signal: "danger" | "warning"; onAcknowledge: () => void; acknowledged?: boolean }
+  | { signal: "caution" | "notice" }
+);
+
+const bands: Record<SignalWord, { word: string; band: string; mark: string }> = {
+  danger: { word: "DANGER", band: "bg-safety-red text-safety-light", mark: "fill-safety-red" },
+  warning: { word: "WARNING", band: "bg-safety-orange text-safety-dark", mark: "fill-safety-orange" },
+  caution: { word: "CAUTION", band: "bg-safety-yellow text-safety-dark", mark: "fill-safety-yellow" },
+  notice: { word: "NOTICE", band: "bg-safety-blue text-safety-light italic", mark: "" },
+};
+
+/** ANSI Z535.4 style message: signal-word band, then what to do; DANGER and WARNING must be acknowledged. */
+export function SafetyPanel(props: SafetyPanelProps) {
+  const { signal, title, children } = props;
+  const wordId = useId();
+  const { word, band, mark } = bands[signal];
+
+  return (
+    <section aria-labelledby={wordId} className="overflow-hidden rounded-md border-2 border-ink bg-raised">
+      <div className={`flex items-center gap-3 px-5 py-2 ${band}`}>
+        {signal !== "notice" && <SafetyAlertSymbol exclamationClass={mark} />}
+        <span id={wordId} className="text-2xl font-bold tracking-widest">
+          {word}
+        </span>
+      </div>
+      <div className="flex max-w-[70ch] flex-col gap-3 px-5 py-4">
+        {title && <p className="text-xl font-semibold">{title}</p>}
+        <div className="text-base">{children}</div>
+        {(props.signal === "danger" || props.signal === "warning") && (
+          <Acknowledgement onAcknowledge={props.onAcknowledge} acknowledged={props.acknowledged} />
+        )}
+      </div>
+    </section>
+  );
+}
+
+function Acknowledgement({ onAcknowledge, acknowledged = false }: { onAcknowledge: () => void; acknowledged?: boolean }) {
+  const [done, setDone] = useState(acknowledged);
+  if (done || acknowledged) {
+    return (
+      <p role="status" className="flex min-h-16 items-center gap-3 font-semibold">
+        <svg viewBox="0 0 24 24" className="size-7 shrink-0" aria-hidden="true" focusable="false">
+          <circle cx="12" cy="12" r="11" className="fill-accent" />
+          <path d="M7 12.5l3.2 3.2L17 9" fill="none" strokeWidth="2.6" className="stroke-accent-ink" />
+        </svg>
+        You have read this and will work with care.
+      </p>
+    );
+  }
+  return (
+    <Button
+      variant="primary"
+      size="main"
+      className="self-start"
+      onClick={() => {
+        setDone(true);
+        onAcknowledge();
+      }}
+    >
+      Read and understood
+    </Button>
+  );
+}
+
+/** Equilateral triangle with an exclamation mark, in the band's text colour. */
+function SafetyAlertSymbol({ exclamationClass }: { exclamationClass: string }) {
+  return (
+    <svg viewBox="0 0 28 25" className="h-8 w-9 shrink-0" role="img" aria-label="Safety alert symbol" focusable="false">
+      <path d="M14 1.5L26.8 23.5H1.2z" fill="currentColor" stroke="currentColor" strokeWidth="1.5" strokeLinejoin="round" />
+      <rect x="12.4" y="8" width="3.2" height="9" rx="0.6" className={exclamationClass} />
+      <circle cx="14" cy="20" r="1.8" className={exclamationClass} />
+    </svg>
+  );
+}

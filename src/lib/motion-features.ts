@@ -1,0 +1,3 @@
+import { domAnimation } from "framer-motion";
+
+export default domAnimation;

@@ -1,0 +1,90 @@
+import { screen, within } from "@testing-library/react";
+import userEvent from "@testing-library/user-event";
+import { describe, expect, it } from "vitest";
+import type { Role } from "../../shared/schemas/users.ts";
+import { meAnswers, renderApp, signedInAs, stubApi } from "./render-app.tsx";
+
+const navigationByRole: [Role, string, string[]][] = [
+  ["apprentice", "/bench", ["Bench", "Work orders"]],
+  ["senior_tech", "/flows", ["Flows", "Bench", "Work orders"]],
+  ["shop_lead", "/review", ["Review", "Shop insight", "Work orders", "Shop settings", "People"]],
+];
+
+describe("app shell", () => {
+  it.each(navigationByRole)("shows the %s role only its own areas and opens the first one", async (role, home, labels) => {
+    stubApi(meAnswers(signedInAs(role)));
+    const { router } = renderApp("/");
+
+    const nav = await screen.findByRole("navigation", { name: "Areas" });
+    const links = within(nav).getAllByRole("link");
+    expect(links.map((link) => link.textContent)).toEqual(labels);
+    expect(router.state.location.pathname).toBe(home);
+    expect(within(nav).getByRole("link", { name: labels[0] })).toHaveAttribute("aria-current", "page");
+    expect(screen.getByRole("heading", { level: 1, name: labels[0] })).toBeInTheDocument();
+    expect(screen.getByText("Coming in a later release")).toBeInTheDocument();
+  });
+
+  it("shows the shop, the person and their role in the header", async () => {
+    stubApi(meAnswers(signedInAs("senior_tech", { name: "Tomás Reyes" })));
+    renderApp("/bench");
+    const header = await screen.findByRole("banner");
+    expect(within(header).getByText("Millbrook Mower & Saw")).toBeInTheDocument();
+    expect(within(header).getByText("Tomás Reyes")).toBeInTheDocument();
+    expect(within(header).getByText("Senior tech")).toBeInTheDocument();
+    expect(within(header).getByRole("button", { name: "Sign out" })).toBeInTheDocument();
+  });
+
+  it("tells an apprentice that shop settings are not for their role, with a way home", async () => {
+    stubApi(meAnswers(signedInAs("apprentice")));
+    renderApp("/settings");
+    expect(await screen.findByRole("heading", { level: 1, name: "Not for your role" })).toBeInTheDocument();
+    expect(screen.getByText(/The Shop settings area is open to shop leads\./)).toBeInTheDocument();
+    expect(screen.getByRole("link", { name: "Go to Bench" })).toHaveAttribute("href", "/bench");
+  });
+
+  it("shows a plain not-found page for an unknown address", async () => {
+    stubApi(meAnswers(signedInAs("shop_lead")));
+    renderApp("/carburettor-museum");
+    expect(await screen.findByRole("heading", { level: 1, name: "No page here" })).toBeInTheDocument();
+    expect(screen.getByRole("link", { name: "Go to Review" })).toHaveAttribute("href", "/review");
+  });
+
+  it("sends a signed-out visitor to sign in, remembering where they were going", async () => {
+    stubApi(meAnswers(null));
+    const { router } = renderApp("/work-orders");
+    expect(await screen.findByRole("heading", { level: 1, name: "Sign in" })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe("/sign-in");
+    expect(router.state.location.search).toBe("?next=%2Fwork-orders");
+  });
+
+  it("signs out, forgets the session and returns to sign-in", async () => {
+    let me: ReturnType<typeof signedInAs> | null = signedInAs("apprentice");
+    const fetchMock = stubApi(({ url, method }) => {
+      if (url === "/api/auth/sign-out" && method === "POST") {
+        me = null;
+        return new Response(null, { status: 204 });
+      }
+      return meAnswers(me)({ url, method, body: undefined });
+    });
+    const { queryClient } = renderApp("/bench");
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole("button", { name: "Sign out" }));
+
+    expect(await screen.findByRole("heading", { level: 1, name: "Sign in" })).toBeInTheDocument();
+    expect(fetchMock).toHaveBeenCalledWith("/api/auth/sign-out", expect.objectContaining({ method: "POST" }));
+    expect(queryClient.getQueryCache().findAll().every((query) => query.state.data == null)).toBe(true);
+  });
+
+  it("switches to the high-contrast theme and remembers it", async () => {
+    stubApi(meAnswers(signedInAs("apprentice")));
+    renderApp("/bench");
+    const user = userEvent.setup();
+    const toggle = await screen.findByRole("button", { name: /High contrast/ });
+    expect(toggle).toHaveAttribute("aria-pressed", "false");
+
+    await user.click(toggle);
+    expect(toggle).toHaveAttribute("aria-pressed", "true");
+    expect(document.documentElement).toHaveAttribute("data-theme", "contrast");
+    expect(window.localStorage.getItem("benchpath.theme")).toBe("contrast");
+  });
+});
