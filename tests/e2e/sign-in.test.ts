@@ -38,7 +38,7 @@ for (const [orientation, viewport] of Object.entries(viewports)) {
         await page.getByLabel(/^password$/i).fill(demo.password);
         await page.getByRole("button", { name: /^sign in$/i }).click();
         await page.waitForURL(new RegExp(`${homes[demo.role]}$`));
-        const links = await page.getByRole("navigation", { name: /main/i }).getByRole("link").allInnerTexts();
+        const links = await page.getByRole("navigation", { name: /areas/i }).getByRole("link").allInnerTexts();
         expect(links.map((l) => l.trim())).toEqual(navigation[demo.role]);
         await snap(page, `home-${demo.role}-${orientation}`);
         await page.getByRole("button", { name: /sign out/i }).click();

@@ -1,7 +1,7 @@
 import { Router, type Request, type Response } from "express";
 import type { AppContext } from "../../context.ts";
 import { validate } from "../../lib/validate.ts";
-import { unauthenticated } from "../../lib/errors.ts";
+import { HttpError } from "../../lib/errors.ts";
 import { currentUser, requireUser } from "../../auth/middleware.ts";
 import { authorize } from "../../auth/policies.ts";
 import { clearSessionCookie, setSessionCookie } from "../../auth/cookies.ts";
@@ -18,7 +18,7 @@ export function authRouter(ctx: AppContext): Router {
   router.post("/sign-in", ...signInThrottle(), validate({ body: signInRequestSchema }), async (req: Request, res: Response) => {
     const { email, password } = req.body as z.output<typeof signInRequestSchema>;
     const result = await signIn(ctx, email, password, req.ip);
-    if (!result) throw unauthenticated("That e-mail and password do not match an active account.");
+    if (!result) throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an active account.");
     setSessionCookie(req, res, ctx.env.COOKIE_SECURE, result.token, result.expiresAt);
     const body: MeResponse = { user: result.user, shop: { name: await getShopName(ctx) } };
     res.json(body);

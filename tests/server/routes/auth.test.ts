@@ -44,7 +44,7 @@ describe("POST /api/auth/sign-in", () => {
     const unknown = await t.agent().post("/api/auth/sign-in").send({ email: "nobody@bench.test", password: "not-the-password" });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
-    expect(wrong.body.error.id).toBe("unauthenticated");
+    expect(wrong.body.error.id).toBe("invalid_credentials");
     expect(wrong.body.error.message).toBe(unknown.body.error.message);
     expect(wrong.body.error.message).not.toMatch(/password is|e-mail is|no account/i);
     const failures = await t.ctx.db.select().from(auditLog).where(eq(auditLog.recordId, user.id));
