@@ -1,8 +1,24 @@
-import type { ReactNode } from "react";
-import { LazyMotion, MotionConfig, m } from "framer-motion";
+import { useSyncExternalStore, type ReactNode } from "react";
+import { LazyMotion, MotionConfig, m, type FeatureBundle } from "framer-motion";
+
+let featuresFailed = false;
+const listeners = new Set<() => void>();
 
 // Animation features load after the first paint, keeping them off the bench's first load.
-const loadFeatures = () => import("./motion-features.ts").then((module) => module.default);
+const loadFeatures = (): Promise<FeatureBundle> =>
+  import("./motion-features.ts")
+    .then((module) => module.default)
+    .catch(() => {
+      // Without the features content would stay at its invisible starting point, so drop the animation.
+      featuresFailed = true;
+      listeners.forEach((listener) => listener());
+      return new Promise<FeatureBundle>(() => {});
+    });
+
+function subscribe(listener: () => void) {
+  listeners.add(listener);
+  return () => listeners.delete(listener);
+}
 
 export function MotionProvider({ children }: { children: ReactNode }) {
   return (
@@ -14,6 +30,8 @@ export function MotionProvider({ children }: { children: ReactNode }) {
 
 /** A short rise into place for a page's content; with reduced motion only the fade remains. */
 export function PageEnter({ children, className }: { children: ReactNode; className?: string }) {
+  const withoutMotion = useSyncExternalStore(subscribe, () => featuresFailed, () => false);
+  if (withoutMotion) return <div className={className}>{children}</div>;
   return (
     <m.div
       className={className}

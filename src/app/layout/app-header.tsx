@@ -24,9 +24,9 @@ export function AppHeader({ me }: { me: MeResponse }) {
           <span aria-hidden="true" className="h-8 w-0.5 shrink-0 bg-line" />
           <p className="truncate text-lg font-semibold">{me.shop.name}</p>
         </div>
-        <div className="flex items-center gap-3">
-          <p className="flex flex-col text-right leading-tight">
-            <span className="font-semibold">{me.user.name}</span>
+        <div className="ml-auto flex items-center gap-3">
+          <p className="flex max-w-56 min-w-0 flex-col text-right leading-tight">
+            <span className="truncate font-semibold">{me.user.name}</span>
             <span className="text-base text-ink-muted">{roleLabels[me.user.role]}</span>
           </p>
           <ContrastToggle />

@@ -14,15 +14,15 @@ export function AreaNav({ role }: { role: Role }) {
             <NavLink
               to={area.path}
               className={({ isActive }) =>
-                `${linkBase} ${isActive ? "border-accent bg-accent font-semibold text-accent-ink" : "border-transparent text-ink"}`
+                `${linkBase} ${isActive ? "border-accent bg-accent font-semibold text-accent-ink" : "border-line-strong bg-raised text-ink"}`
               }
             >
               {({ isActive }) => (
                 <>
-                  {/* The current area is marked by a bar as well as by colour. */}
+                  {/* The current area is marked by a bar as well as by colour; in the rail, labels stay aligned. */}
                   <span
                     aria-hidden="true"
-                    className={`h-6 w-1.5 shrink-0 rounded-full ${isActive ? "bg-accent-ink" : "bg-transparent"}`}
+                    className={`h-6 w-1.5 shrink-0 rounded-full ${isActive ? "bg-accent-ink" : "hidden bg-transparent lg:block"}`}
                   />
                   {area.label}
                 </>

@@ -28,7 +28,7 @@ export function describeSignInProblem(error: unknown): SignInProblem | null {
     case "too_many_attempts":
       return {
         title: "Too many sign-in attempts.",
-        body: `For safety, sign-in is paused. ${waitSentence(error.retryAfter)}`,
+        body: `To protect the shop's accounts, sign-in is paused. ${waitSentence(error.retryAfter)}`,
       };
     case clientErrorIds.offline:
       return {
