@@ -2,16 +2,22 @@ import { isRouteErrorResponse, useRouteError } from "react-router";
 import { Button } from "../../components/ui/button.tsx";
 import { FormProblem } from "../../components/ui/form-message.tsx";
 import { clientErrorIds, isApiRequestError } from "../../lib/api-client.ts";
-import type { NotForRoleData } from "../loaders.ts";
+import { areaIds, type AreaId } from "../areas.ts";
 import { NotFound } from "./not-found.tsx";
 import { NotForRole } from "./not-for-role.tsx";
 
 /** Shown inside the shell when an area cannot open: wrong role, no such page, or a failure. */
 export function AreaProblem() {
   const error = useRouteError();
-  if (isRouteErrorResponse(error) && error.status === 403) return <NotForRole area={(error.data as NotForRoleData).area} />;
+  const area = isRouteErrorResponse(error) && error.status === 403 ? forbiddenArea(error.data) : null;
+  if (area) return <NotForRole area={area} />;
   if (isRouteErrorResponse(error) && error.status === 404) return <NotFound />;
   return <ScreenProblem error={error} />;
+}
+
+function forbiddenArea(data: unknown): AreaId | null {
+  const area = (data as { area?: unknown } | null)?.area;
+  return areaIds.find((id) => id === area) ?? null;
 }
 
 export function ScreenProblem({ error }: { error: unknown }) {
