@@ -3,7 +3,7 @@ import { z } from "zod";
 import { equipmentKinds } from "../equipment.ts";
 import { quantities } from "../calc/units.ts";
 
-const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
+export const SLUG = /^[a-z0-9]+(-[a-z0-9]+)*$/;
 const OPTION_VALUE = /^[a-z0-9]+([-_][a-z0-9]+)*$/;
 
 /** Inside a section, this target means "go on at the calling step's next". */
@@ -18,7 +18,11 @@ const slug = (what: string) =>
 
 export const flowIdSchema = slug("an id");
 export const stepIdSchema = slug("a step id");
-export const targetSchema = z.union([stepIdSchema, z.literal(CONTINUE)], { error: `a target is a step id or "${CONTINUE}"` });
+// One regex rather than a union of two schemas: a union costs a parse of each option, per target.
+export const targetSchema = z
+  .string()
+  .max(80, { error: "a target is at most 80 characters" })
+  .regex(/^(@continue|[a-z0-9]+(-[a-z0-9]+)*)$/, { error: `a target is a step id (lowercase letters, digits, single hyphens) or "${CONTINUE}"` });
 
 export const signalWords = ["DANGER", "WARNING", "CAUTION", "NOTICE"] as const;
 export const verdicts = ["good", "marginal", "low", "high", "implausible"] as const;
@@ -143,14 +147,17 @@ export const flowDefinitionSchema = z.strictObject({
   sections: z.record(flowIdSchema, sectionDefinitionSchema).optional(),
 });
 
-// The validator parses the envelope and each step on its own, so it can name the step at fault.
+// The validator parses the envelope and each step on its own, so it can name the step at fault;
+// here steps only need to be an object (a record schema would walk every key a second time).
+const anObject = (what: string) =>
+  z.custom<Record<string, unknown>>((v) => typeof v === "object" && v !== null && !Array.isArray(v), { error: `${what} is an object keyed by id` });
 export const flowEnvelopeSchema = z.strictObject({
   ...envelope,
   appliesTo: appliesToSchema,
-  steps: z.record(z.string(), z.unknown()),
-  sections: z.record(z.string(), z.unknown()).optional(),
+  steps: anObject("steps"),
+  sections: anObject("sections").optional(),
 });
-export const sectionEnvelopeSchema = z.strictObject({ ...envelope, steps: z.record(z.string(), z.unknown()) });
+export const sectionEnvelopeSchema = z.strictObject({ ...envelope, steps: anObject("steps") });
 
 export type SignalWord = (typeof signalWords)[number];
 export type Verdict = (typeof verdicts)[number];
