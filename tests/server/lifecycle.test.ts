@@ -23,7 +23,7 @@ interface Started {
 }
 
 function startServer(dataDir: string): Started {
-  const env = { ...process.env, DATA_DIR: dataDir, PORT: "0", HOST: "127.0.0.1", NODE_ENV: "test", LOG_LEVEL: "warn", BACKUPS_KEPT: "0" };
+  const env: NodeJS.ProcessEnv = { ...process.env, DATA_DIR: dataDir, PORT: "0", HOST: "127.0.0.1", NODE_ENV: "test", LOG_LEVEL: "warn", BACKUPS_KEPT: "0" };
   delete env.DATABASE_URL;
   const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], { cwd: root, env, stdio: ["ignore", "pipe", "pipe"] });
   children.push(child);
