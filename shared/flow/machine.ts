@@ -58,6 +58,8 @@ export function createFlowMachine(compiled: CompiledFlow) {
       // step with an answer among its options or a reading checkReading and the bands accept.
       leadsToKind: ({ context, event }, params: { kind: RunKind }) => stepOf(nextOf(context, event) ?? undefined)?.kind === params.kind,
       cameFromKind: ({ context }, params: { kind: RunKind }) => stepOf(context.path[context.path.length - 2])?.kind === params.kind,
+      // The root's restart would otherwise look possible to can() once the session has ended.
+      isInProgress: ({ context }) => current(context)?.kind !== "finding",
     },
     actions: {
       recordAnswer: assign(({ context, event }) => {
@@ -110,7 +112,7 @@ export function createFlowMachine(compiled: CompiledFlow) {
     id: compiled.id,
     initial: start.kind,
     context: ({ input }) => initialContext(input, compiled.start),
-    on: { "session.restart": { target: `.${start.kind}`, actions: { type: "restartSession", params: { start: compiled.start } } } },
+    on: { "session.restart": { guard: "isInProgress", target: `.${start.kind}`, actions: { type: "restartSession", params: { start: compiled.start } } } },
     states: {
       instruction: { tags: ["instruction"], on: { "step.answer": answer, "step.back": back } },
       choice: { tags: ["choice"], on: { "step.answer": answer, "step.back": back } },
