@@ -164,7 +164,7 @@ describe("createFlowMachine", () => {
     actor.send(record("gap", 0.3, "mm"));
     const stored: unknown = JSON.parse(JSON.stringify(actor.getPersistedSnapshot()));
     actor.stop();
-    const restored = createActor(machine, { snapshot: stored as Snapshot<unknown> }).start();
+    const restored = createActor(machine, { snapshot: stored as Snapshot<unknown>, input: seaLevel }).start();
     expect(restored.getSnapshot().context).toEqual(actor.getSnapshot().context);
     expect(restored.getSnapshot().hasTag("instruction")).toBe(true);
     restored.send(answer("check/clean"));
