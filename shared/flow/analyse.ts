@@ -11,7 +11,7 @@ import {
   sectionEnvelopeSchema,
   type FlowStep,
 } from "./schema.ts";
-import { checkStep, rawTargetsOf, targetsOf } from "./validate-steps.ts";
+import { checkStep, rawTargetsOf, targetsOf, whereOf, type StepTarget } from "./validate-steps.ts";
 
 /** What a caller needs to know about a section: can it end in a finding, can it hand back. */
 export interface SectionSummary {
@@ -29,6 +29,8 @@ export interface DocAnalysis {
   steps: Record<string, FlowStep> | null;
   summary: SectionSummary;
   calls: Array<{ stepId: string; section: string }>;
+  /** Steps that are not section calls: what this document adds once inlined, besides its calls. */
+  ownSteps: number;
 }
 
 export interface AnalysisEnv {
@@ -50,6 +52,8 @@ export function schemaProblems(stepId: string | null, issues: readonly z.core.$Z
     return error(stepId, "schema_invalid", where ? `${where}: ${issue.message}` : issue.message);
   });
 }
+
+const whereAt = (step: FlowStep | null, lenient: StepTarget[] | null, k: number) => (step ? whereOf(step, k) : lenient![k]!.where);
 
 function summaryOf(sectionId: string, callerStepId: string, problems: Problem[], env: AnalysisEnv): SectionSummary {
   const onStack = env.stack.indexOf(sectionId);
@@ -75,7 +79,7 @@ function summaryOf(sectionId: string, callerStepId: string, problems: Problem[],
 export function analyseDocument(raw: unknown, mode: "flow" | "section", env: AnalysisEnv): DocAnalysis {
   const problems: Problem[] = [];
   const calls: DocAnalysis["calls"] = [];
-  const broken = (): DocAnalysis => ({ problems, envelope: null, steps: null, summary: OPTIMISTIC, calls });
+  const broken = (): DocAnalysis => ({ problems, envelope: null, steps: null, summary: OPTIMISTIC, calls, ownSteps: 0 });
   if (!isRecord(raw)) {
     problems.push(error(null, "schema_invalid", `a ${mode} is a JSON object`));
     return broken();
@@ -89,27 +93,30 @@ export function analyseDocument(raw: unknown, mode: "flow" | "section", env: Ana
     return broken();
   }
 
+  const n = ids.length;
   const index = new Map<string, number>();
-  ids.forEach((id, i) => index.set(id, i));
-  const parsed: Array<FlowStep | null> = [];
-  const edges: number[][] = [];
-  const exits: boolean[] = [];
-  const continues: boolean[] = [];
-  const finishes: boolean[] = [];
+  for (let i = 0; i < n; i++) index.set(ids[i]!, i);
+  const parsed: Array<FlowStep | null> = new Array(n);
+  const offsets = new Int32Array(n + 1);
+  const targetsOut: number[] = [];
+  const exits = new Uint8Array(n);
+  const continues = new Uint8Array(n);
+  const finishes = new Uint8Array(n);
   let allParsed = true;
 
-  ids.forEach((id) => {
+  for (let i = 0; i < n; i++) {
+    const id = ids[i]!;
     if (id.length > 80 || !SLUG.test(id)) {
       problems.push(error(id, "step_id_invalid", `step id "${id}" must use lowercase letters, digits and single hyphens (at most 80 characters)`));
     }
     const result = flowStepSchema.safeParse(rawSteps[id]);
     const step = result.success ? result.data : null;
-    if (result.success) problems.push(...checkStep(id, result.data));
+    if (result.success) checkStep(id, result.data, problems);
     else {
       allParsed = false;
       problems.push(...schemaProblems(id, result.error.issues));
     }
-    parsed.push(step);
+    parsed[i] = step;
     let exit = step === null || step.kind === "finding";
     let finish = exit;
     let followNext = true;
@@ -123,51 +130,53 @@ export function analyseDocument(raw: unknown, mode: "flow" | "section", env: Ana
         problems.push(warning(id, "section_never_continues", `section "${step.section}" always ends in a finding, so next "${step.next}" is never used`));
       }
     }
-    const out: number[] = [];
     let continuesHere = step === null;
-    for (const { where, target } of step ? targetsOf(step) : rawTargetsOf(rawSteps[id])) {
+    const lenient = step ? null : rawTargetsOf(rawSteps[id]);
+    const targets = step ? targetsOf(step) : lenient!.map((t) => t.target);
+    for (let k = 0; k < targets.length; k++) {
+      const target = targets[k]!;
       if (target === CONTINUE) {
-        if (mode === "flow") problems.push(error(id, "continue_in_flow", `${where} is "${CONTINUE}", which only a section can use`));
+        if (mode === "flow") problems.push(error(id, "continue_in_flow", `${whereAt(step, lenient, k)} is "${CONTINUE}", which only a section can use`));
         exit = true;
         continuesHere = true;
         continue;
       }
       const to = index.get(target);
-      if (to === undefined) problems.push(error(id, "target_unknown", `${where} goes to "${target}", which is not a step`));
-      else if (followNext) out.push(to);
+      if (to === undefined) problems.push(error(id, "target_unknown", `${whereAt(step, lenient, k)} goes to "${target}", which is not a step`));
+      else if (followNext) targetsOut.push(to);
     }
-    edges.push(out);
-    exits.push(exit);
-    continues.push(continuesHere);
-    finishes.push(finish);
-  });
+    offsets[i + 1] = targetsOut.length;
+    exits[i] = exit ? 1 : 0;
+    continues[i] = continuesHere ? 1 : 0;
+    finishes[i] = finish ? 1 : 0;
+  }
 
   const start = typeof raw.start === "string" ? index.get(raw.start) : undefined;
   if (start === undefined) {
     problems.push(error(null, "start_missing", `start ${typeof raw.start === "string" ? `"${raw.start}" is not a step` : "is missing"}`));
   }
-  const { reached, canExit } = analyseGraph({ edges, exits }, start ?? null);
+  const { reached, canExit } = analyseGraph({ offsets, targets: targetsOut, exits }, start ?? null);
   const stuck = mode === "flow" ? "no finding can be reached from this step (a loop needs a way out)" : `neither a finding nor "${CONTINUE}" can be reached from this step`;
   let canFinish = start === undefined;
   let canContinue = start === undefined;
-  ids.forEach((id, i) => {
+  const steps: Record<string, FlowStep> = {};
+  for (let i = 0; i < n; i++) {
+    const id = ids[i]!;
     if (start !== undefined && !reached[i]) problems.push(error(id, "step_unreachable", "no path from the start leads to this step"));
     if (!canExit[i]) problems.push(error(id, "no_finding_reachable", stuck));
     if (reached[i]) {
-      canFinish = canFinish || finishes[i]!;
-      canContinue = canContinue || continues[i]!;
+      canFinish = canFinish || finishes[i] === 1;
+      canContinue = canContinue || continues[i] === 1;
     }
-  });
-
-  const steps: Record<string, FlowStep> = {};
-  ids.forEach((id, i) => {
-    if (parsed[i]) steps[id] = parsed[i];
-  });
+    const step = parsed[i];
+    if (step) steps[id] = step;
+  }
   return {
     problems,
     envelope: envelope.success ? envelope.data : null,
     steps: allParsed ? steps : null,
     summary: { canFinish, canContinue },
     calls,
+    ownSteps: ids.length - calls.length,
   };
 }

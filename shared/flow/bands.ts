@@ -38,6 +38,8 @@ function compareUpper(a: Bound | null, b: Bound | null): number {
   return (a.inclusive ? 1 : 0) - (b.inclusive ? 1 : 0);
 }
 
+const order = (a: Band, b: Band) => compareLower(a.from, b.from) || compareUpper(a.to, b.to);
+
 function isEmpty(band: Band): boolean {
   const { from, to } = band;
   if (from === null || to === null) return false;
@@ -55,27 +57,30 @@ function relation(cover: Bound | null, next: Bound | null): "overlap" | "adjacen
 /** Every way a band list fails to cover the number line exactly once, in plain words. */
 export function checkBands(bands: Band[], unit: string): BandIssue[] {
   const issues: BandIssue[] = [];
-  const live: Array<{ band: Band; index: number }> = [];
-  bands.forEach((band, index) => {
+  const live: Band[] = [];
+  for (const band of bands) {
     if (isEmpty(band)) {
       issues.push({ code: "band_empty", message: `band "${band.label}" covers nothing: it runs from ${num(band.from?.value ?? 0)} to ${num(band.to?.value ?? 0)} ${unit}` });
-    } else live.push({ band, index });
-  });
-  if (live.length === 0) return issues;
-  const sorted = [...live].sort((a, b) => compareLower(a.band.from, b.band.from) || compareUpper(a.band.to, b.band.to));
-  const misplaced = sorted.findIndex((entry, i) => entry !== live[i]);
-  if (misplaced >= 0) {
-    const entry = sorted[misplaced]!;
-    issues.push({ code: "band_order", message: `list the bands from low to high: band "${entry.band.label}" belongs at position ${misplaced + 1}, not ${live.indexOf(entry) + 1}` });
+    } else live.push(band);
   }
-  const first = sorted[0]!.band;
+  if (live.length === 0) return issues;
+  let sorted = live;
+  // Lists are almost always written in order; sort (and say so) only when one is not.
+  if (live.some((band, i) => i > 0 && order(live[i - 1]!, band) > 0)) {
+    sorted = [...live].sort(order);
+    const misplaced = sorted.findIndex((band, i) => band !== live[i]);
+    const band = sorted[misplaced]!;
+    issues.push({ code: "band_order", message: `list the bands from low to high: band "${band.label}" belongs at position ${misplaced + 1}, not ${live.indexOf(band) + 1}` });
+  }
+  const first = sorted[0]!;
   if (first.from !== null) {
     const gapTo: Bound = { value: first.from.value, inclusive: !first.from.inclusive };
     issues.push({ code: "band_start_bounded", message: `the lowest band must start at -∞ (from: null): nothing covers ${formatInterval(null, gapTo, unit)}` });
   }
   let cover = first.to;
   let coverBand = first;
-  for (const { band } of sorted.slice(1)) {
+  for (let i = 1; i < sorted.length; i++) {
+    const band = sorted[i]!;
     const rel = relation(cover, band.from);
     if (rel === "gap" && cover !== null && band.from !== null) {
       const gap = formatInterval({ value: cover.value, inclusive: !cover.inclusive }, { value: band.from.value, inclusive: !band.from.inclusive }, unit);

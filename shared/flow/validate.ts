@@ -1,7 +1,7 @@
 // validateFlow / validateSection: pure, never throw, and report every problem they find.
 import { analyseDocument, type AnalysisEnv, type DocAnalysis } from "./analyse.ts";
 import { error, hasErrors, type Problem } from "./problems.ts";
-import { MAX_STEPS, type FlowDefinition, type FlowStep, type SectionDefinition } from "./schema.ts";
+import { MAX_STEPS, type FlowDefinition, type SectionDefinition } from "./schema.ts";
 
 export type { Problem, ProblemCode } from "./problems.ts";
 export type SectionLibrary = Record<string, SectionDefinition> | readonly SectionDefinition[];
@@ -60,19 +60,15 @@ function reachedSections(top: DocAnalysis, env: AnalysisEnv, skip: string | null
 }
 
 /** Steps after inlining, counted per section once, so nesting cannot make compiling explode. */
-function inlinedSize(steps: Record<string, FlowStep>, sections: Map<string, DocAnalysis>, memo: Map<string, number>): number {
-  let size = 0;
-  for (const step of Object.values(steps)) {
-    if (step.kind !== "section") {
-      size += 1;
-      continue;
-    }
-    let inner = memo.get(step.section);
+function inlinedSize(doc: DocAnalysis, sections: Map<string, DocAnalysis>, memo: Map<string, number>): number {
+  let size = doc.ownSteps;
+  for (const { section } of doc.calls) {
+    let inner = memo.get(section);
     if (inner === undefined) {
-      const nested = sections.get(step.section)?.steps;
-      memo.set(step.section, 0);
+      const nested = sections.get(section);
+      memo.set(section, 0);
       inner = nested ? inlinedSize(nested, sections, memo) : 0;
-      memo.set(step.section, inner);
+      memo.set(section, inner);
     }
     size += inner;
     if (size > MAX_STEPS) return size;
@@ -101,7 +97,7 @@ export function validateFlow(input: unknown, sections: SectionLibrary): FlowVali
     env.done.set(id, unused);
   }
   if (hasErrors(problems) || !top.envelope || !top.steps) return { ok: false, problems };
-  const size = inlinedSize(top.steps, reached.sections, new Map());
+  const size = inlinedSize(top, reached.sections, new Map());
   if (size > MAX_STEPS) {
     problems.push(error(null, "too_many_steps", `with its sections inlined the flow has more than ${MAX_STEPS} steps`));
     return { ok: false, problems };
