@@ -14,6 +14,8 @@ import { demoSignInLines, isEmpty, seedDemo, demoShop, demoUsers } from "./db/se
 import { rollingBackup } from "./backup.ts";
 import { eq } from "drizzle-orm";
 import { users } from "./db/schema.ts";
+import { BuiltInFlowError, loadBuiltInFlows } from "./flows/builtin.ts";
+import { installBuiltInFlows } from "./services/flows.ts";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 
@@ -47,6 +49,13 @@ async function main() {
     throw error;
   }
   const logger = createLogger(env.LOG_LEVEL);
+  let builtInFlows;
+  try {
+    builtInFlows = loadBuiltInFlows();
+  } catch (error) {
+    if (error instanceof BuiltInFlowError) fail(`Benchpath cannot start. ${error.message}`);
+    throw error;
+  }
   let store;
   try {
     store = await openStore(env);
@@ -59,6 +68,8 @@ async function main() {
     await seedDemo(handle.db);
     logger.info("seeded the demo shop");
   }
+  const installed = await installBuiltInFlows(handle.db, builtInFlows);
+  if (installed.length > 0) logger.info({ flows: installed }, "installed built-in flows");
   const ctx = createContext({ db: handle.db, env, logger, health: healthProbe(handle) });
   const clientDir = [path.resolve(here, "..", "client"), path.resolve(here, "..", "dist", "client")].find((d) => existsSync(path.join(d, "index.html")));
   const app = createApp(ctx, { clientDir: clientDir ?? null, clientMiddleware: await devClient(env) });

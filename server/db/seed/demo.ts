@@ -5,6 +5,7 @@ import type { Database } from "../client.ts";
 import * as schema from "../schema.ts";
 import { hashPassword } from "../../auth/password.ts";
 import { recordAudit } from "../../services/audit.ts";
+import { installBuiltInFlows } from "../../services/flows.ts";
 import type { Role } from "../../../shared/schemas/users.ts";
 
 /** The demo scenario: an invented shop and its people. Nothing here is a real business or person. */
@@ -44,12 +45,13 @@ export async function seedDemo(db: Database): Promise<void> {
   });
 }
 
-/** Empties every table, then seeds the demo again. */
+/** Empties every table, then seeds the demo and the built-in flows again. */
 export async function resetDemo(db: Database): Promise<void> {
   const tables = (Object.values(schema) as unknown[]).filter((value): value is PgTable => is(value, PgTable));
   const names = tables.map((t) => `"${getTableName(t)}"`).join(", ");
   await db.execute(sql.raw(`TRUNCATE ${names} CASCADE`));
   await seedDemo(db);
+  await installBuiltInFlows(db);
 }
 
 export function demoSignInLines(): string[] {
