@@ -85,15 +85,11 @@ export function answerTarget(step: CompiledStep, value: string): string | null {
   return null;
 }
 
-// Written out in full: on this V8, an object spread followed by new keys is slow.
-function readingResult(
-  check: { value: number; unit: Unit; canonical: number },
-  stepValue: number,
-  stepUnit: Unit,
-  canonical: Unit,
-  o: { verdict: Verdict; reason: string; label: string | null; outcome: string; next: string },
-): ReadingResult {
-  return {
+type Outcome = Pick<ReadingResult, "verdict" | "reason" | "label" | "outcome" | "next" | "compression">;
+
+// Written out in full, extra keys first: on this V8, adding keys to an object or after a spread is slow.
+function readingResult(check: { value: number; unit: Unit; canonical: number }, stepValue: number, stepUnit: Unit, canonical: Unit, o: Outcome): ReadingResult {
+  const result: ReadingResult = {
     ok: true,
     value: check.value,
     unit: check.unit,
@@ -107,6 +103,7 @@ function readingResult(
     outcome: o.outcome,
     next: o.next,
   };
+  return o.compression ? { compression: o.compression, ...result } : result;
 }
 
 export function evaluateReading(step: CompiledStep, value: unknown, unit: string, input: FlowInput): ReadingResult | Refusal {
@@ -117,8 +114,7 @@ export function evaluateReading(step: CompiledStep, value: unknown, unit: string
   if (!check.ok) return { ok: false, code: check.code, reason: check.reason };
   const stepUnit = step.unit;
   const stepValue = check.unit === stepUnit ? check.value : roundSig(convert(check.value, check.unit, stepUnit), 12);
-  const result = (verdict: Verdict, reason: string, label: string | null, outcome: string, next: string) =>
-    readingResult(check, stepValue, stepUnit, canonicalUnit[step.quantity], { verdict, reason, label, outcome, next });
+  const canonical = canonicalUnit[step.quantity];
   if (step.evaluation) {
     let evaluated;
     try {
@@ -127,9 +123,9 @@ export function evaluateReading(step: CompiledStep, value: unknown, unit: string
       // Only a malformed engine profile or altitude gets here; the reading is refused, not the app.
       return { ok: false, code: "evaluation_failed", reason: `the compression check could not run: ${e instanceof Error ? e.message : String(e)}` };
     }
-    const out = result(evaluated.verdict, evaluated.reason, null, evaluated.verdict, step.evaluation.next[evaluated.verdict]);
-    out.compression = { seaLevelKPa: evaluated.seaLevelKPa, seaLevelPsi: evaluated.seaLevelPsi, ruleId: evaluated.rule.id };
-    return out;
+    const { verdict, reason } = evaluated;
+    const compression = { seaLevelKPa: evaluated.seaLevelKPa, seaLevelPsi: evaluated.seaLevelPsi, ruleId: evaluated.rule.id };
+    return readingResult(check, stepValue, stepUnit, canonical, { verdict, reason, label: null, outcome: verdict, next: step.evaluation.next[verdict], compression });
   }
   const bands = step.bands ?? [];
   const index = bands.findIndex((b) => bandContains(b, stepValue));
@@ -137,5 +133,5 @@ export function evaluateReading(step: CompiledStep, value: unknown, unit: string
   const shown = `${fmt(check.value)} ${unitLabel(check.unit)}${check.unit === stepUnit ? "" : ` (${fmt(stepValue)} ${unitLabel(stepUnit)})`}`;
   if (!band) return { ok: false, code: "no_band", reason: `${shown} falls in none of this step's bands` };
   const reason = `${shown} is in "${band.label}", ${formatInterval(band.from, band.to, unitLabel(stepUnit))}`;
-  return result(band.verdict, reason, band.label, `band:${index}`, band.next);
+  return readingResult(check, stepValue, stepUnit, canonical, { verdict: band.verdict, reason, label: band.label, outcome: `band:${index}`, next: band.next });
 }
