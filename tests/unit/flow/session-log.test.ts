@@ -55,7 +55,7 @@ describe("replaySession", () => {
     const unknownUnit = replaySession(flow, input, [...events, { type: "step.record", stepId: "compression/reading", value: 90, unit: "furlongs" }]);
     expect(unknownUnit).toMatchObject({ ok: false, index: events.length, code: "unknown_unit", stepId: "compression/reading" });
     const nan = replaySession(flow, input, [...events, { type: "step.record", stepId: "compression/reading", value: Number.NaN, unit: "psi" }]);
-    expect(nan).toMatchObject({ ok: false, index: events.length, code: "not_a_number" });
+    expect(nan).toMatchObject({ ok: false, index: events.length, code: "invalid_event" });
   });
 
   it("ends at a finding, takes a note on it, and refuses any step event after it", () => {
