@@ -1,5 +1,7 @@
-import { createBrowserRouter, type RouteObject } from "react-router";
+import { createBrowserRouter, data, type LoaderFunctionArgs, type RouteObject } from "react-router";
 import type { QueryClient } from "@tanstack/react-query";
+import { workOrderQueryOptions } from "../features/work-orders/api/get-work-order.ts";
+import { isApiRequestError } from "../lib/api-client.ts";
 import { areaIds, areas, type AreaId } from "./areas.ts";
 import { areaLoader, homeLoader, rootLoader, signedInLoader, signInLoader } from "./loaders.ts";
 import { NotFound } from "./routes/not-found.tsx";
@@ -9,15 +11,53 @@ import { RootProblem, StartingUp } from "./routes/root-problem.tsx";
 type AreaModule = () => Promise<{ Component: () => React.JSX.Element }>;
 
 // One chunk per area, so the bench never downloads the flow editor or the insight charts.
-const areaModules: Record<AreaId, AreaModule> = {
-  bench: () => import("./routes/bench.tsx"),
-  "work-orders": () => import("./routes/work-orders.tsx"),
+const areaModules: Record<Exclude<AreaId, "bench" | "work-orders">, AreaModule> = {
   flows: () => import("./routes/flows.tsx"),
   review: () => import("./routes/review.tsx"),
   insight: () => import("./routes/insight.tsx"),
   settings: () => import("./routes/settings.tsx"),
   people: () => import("./routes/people.tsx"),
 };
+
+/** Opens a work order's screen with its data ready; an unknown id is the plain not-found page. */
+function workOrderLoader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    try {
+      await queryClient.ensureQueryData(workOrderQueryOptions(params.workOrderId ?? ""));
+    } catch (error) {
+      if (isApiRequestError(error) && error.status === 404) throw data(null, { status: 404 });
+      throw error;
+    }
+    return null;
+  };
+}
+
+// Areas with more than one screen load each screen on its own.
+function areaChildren(queryClient: QueryClient): Record<"bench" | "work-orders", RouteObject[]> {
+  const bench = () => import("./routes/bench.tsx");
+  const workOrders = () => import("./routes/work-orders.tsx");
+  return {
+    bench: [
+      { index: true, lazy: () => bench().then((module) => ({ Component: module.BenchHomeRoute })) },
+      { path: "sessions/:sessionId", lazy: () => bench().then((module) => ({ Component: module.SessionRoute })) },
+    ],
+    "work-orders": [
+      { index: true, lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderListRoute })) },
+      { path: "new", lazy: () => workOrders().then((module) => ({ Component: module.IntakeRoute })) },
+      {
+        path: ":workOrderId",
+        loader: workOrderLoader(queryClient),
+        lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderDetailRoute })),
+      },
+    ],
+  };
+}
+
+function areaRoute(queryClient: QueryClient, id: AreaId): RouteObject {
+  const route = { path: areas[id].path.slice(1), loader: areaLoader(queryClient, id) };
+  if (id === "bench" || id === "work-orders") return { ...route, children: areaChildren(queryClient)[id] };
+  return { ...route, lazy: areaModules[id] };
+}
 
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -36,11 +76,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               ErrorBoundary: AreaProblem,
               children: [
                 { index: true, loader: homeLoader(queryClient) },
-                ...areaIds.map((id) => ({
-                  path: areas[id].path.slice(1),
-                  loader: areaLoader(queryClient, id),
-                  lazy: areaModules[id],
-                })),
+                ...areaIds.map((id) => areaRoute(queryClient, id)),
                 { path: "*", Component: NotFound },
               ],
             },

@@ -1,7 +1,15 @@
-import { LaterReleasePanel } from "../../components/ui/later-release-panel.tsx";
-import { areas } from "../areas.ts";
+import { IntakeForm } from "../../features/work-orders/components/intake-form.tsx";
+import { WorkOrderDetailPage } from "../../features/work-orders/components/work-order-detail-page.tsx";
+import { WorkOrderListPage } from "../../features/work-orders/components/work-order-list-page.tsx";
 
-export function Component() {
-  const { label, summary } = areas["work-orders"];
-  return <LaterReleasePanel title={label} summary={summary} />;
+export function WorkOrderListRoute() {
+  return <WorkOrderListPage />;
+}
+
+export function IntakeRoute() {
+  return <IntakeForm />;
+}
+
+export function WorkOrderDetailRoute() {
+  return <WorkOrderDetailPage />;
 }

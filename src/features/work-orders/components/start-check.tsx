@@ -1,0 +1,64 @@
+import { useNavigate } from "react-router";
+import { equipmentKindLabels } from "../../../../shared/equipment.ts";
+import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
+import { FormProblem } from "../../../components/ui/form-message.tsx";
+import { clientErrorIds, isApiRequestError } from "../../../lib/api-client.ts";
+import { useStartSession } from "../api/start-session.ts";
+
+/** The work order's main action: pick the guided check that fits this unit and go to the bench. */
+export function StartCheck({ workOrder }: { workOrder: WorkOrderDetail }) {
+  const navigate = useNavigate();
+  const start = useStartSession(workOrder.id);
+  const { applicableFlows, unit } = workOrder;
+
+  const onStart = async (flowId: string) => {
+    if (start.isPending) return;
+    try {
+      const sessionId = await start.mutateAsync(flowId);
+      await navigate(`/bench/sessions/${encodeURIComponent(sessionId)}`);
+    } catch {
+      // The problem is shown from the mutation's error below.
+    }
+  };
+
+  return (
+    <section aria-labelledby="start-check" className="flex flex-col gap-4">
+      <h2 id="start-check" className="text-2xl font-semibold">
+        Start a check
+      </h2>
+      {start.isError && <FormProblem title="The check did not start.">{startProblem(start.error)}</FormProblem>}
+      {applicableFlows.length === 0 ? (
+        <div className="flex flex-col gap-2 rounded-xl border-2 border-dashed border-line-strong px-5 py-4">
+          <p className="font-semibold">
+            No guided check fits a {unit.cycle}-stroke {equipmentKindLabels[unit.equipmentKind].toLowerCase()} yet.
+          </p>
+          <p>Checks are picked by the kind of equipment and the engine's cycle. If either is wrong on this work order, tell your shop lead; otherwise ask a senior tech to publish a check for it.</p>
+        </div>
+      ) : (
+        <ul className="flex flex-col gap-3">
+          {applicableFlows.map((flow) => (
+            <li key={flow.flowId}>
+              <button
+                type="button"
+                disabled={start.isPending}
+                onClick={() => void onStart(flow.flowId)}
+                className="flex min-h-20 w-full flex-col items-start gap-1 rounded-xl border-2 border-accent bg-accent px-6 py-4 text-left text-accent-ink disabled:opacity-70"
+              >
+                <span className="text-xl font-semibold">{start.isPending && start.variables === flow.flowId ? `Starting ${flow.title}…` : flow.title}</span>
+                <span className="text-base">{flow.summary}</span>
+              </button>
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}
+
+function startProblem(error: unknown) {
+  if (isApiRequestError(error, clientErrorIds.offline) || isApiRequestError(error, clientErrorIds.unreachable)) {
+    return "Benchpath cannot reach the shop's server. Check that this tablet is on the shop's network, then press the check again.";
+  }
+  if (isApiRequestError(error) && error.status === 403) return "Your role cannot start checks. Ask an apprentice or a senior tech.";
+  return "Something went wrong on the server. Press the check again; if it keeps happening, tell your shop lead.";
+}

@@ -1,0 +1,44 @@
+import { useQuery } from "@tanstack/react-query";
+import { Link, useLocation, useParams } from "react-router";
+import { ScreenProblemText } from "./screen-problem-text.tsx";
+import { workOrderQueryOptions } from "../api/get-work-order.ts";
+import { unitName, workOrderNumber } from "../lib/work-order-words.ts";
+import type { IntakeArrival } from "./intake-form.tsx";
+import { IntakePhoto } from "./intake-photo.tsx";
+import { SessionList } from "./session-list.tsx";
+import { StartCheck } from "./start-check.tsx";
+import { StateLabel } from "./state-label.tsx";
+import { WorkOrderFacts } from "./work-order-facts.tsx";
+
+export function WorkOrderDetailPage() {
+  const { workOrderId = "" } = useParams();
+  const arrival = useLocation().state as IntakeArrival | null;
+  const { data: workOrder, error } = useQuery(workOrderQueryOptions(workOrderId));
+  if (!workOrder) return error ? <ScreenProblemText /> : <p className="text-ink-muted">Loading the work order…</p>;
+
+  return (
+    <div className="flex max-w-6xl flex-col gap-7">
+      <Link to="/work-orders" className="inline-flex min-h-12 items-center self-start font-semibold text-accent underline decoration-2 underline-offset-4">
+        All work orders
+      </Link>
+      <div className="flex flex-col gap-2">
+        <p className="text-xl font-semibold tabular-figures text-ink-muted">{workOrderNumber(workOrder.number)}</p>
+        <h1 className="text-step font-semibold">{unitName(workOrder)}</h1>
+        <div className="flex flex-wrap items-center gap-3">
+          <StateLabel state={workOrder.state} />
+          <span>for {workOrder.customer.name}</span>
+        </div>
+      </div>
+      <div className="grid gap-8 landscape:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+        <div className="flex flex-col gap-8 landscape:order-2">
+          <StartCheck workOrder={workOrder} />
+          <SessionList sessions={workOrder.sessions} />
+        </div>
+        <div className="flex flex-col gap-8">
+          <WorkOrderFacts workOrder={workOrder} />
+          <IntakePhoto workOrderId={workOrder.id} photoId={workOrder.intakePhotoId} notSaved={arrival?.photoNotSaved ?? false} />
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import { useEffect, useState } from "react";
+import { useQuery } from "@tanstack/react-query";
+import { Link, useSearchParams } from "react-router";
+import { buttonClasses } from "../../../components/ui/button.tsx";
+import { ChoiceGroup } from "../../../components/ui/choice-group.tsx";
+import { FormProblem } from "../../../components/ui/form-message.tsx";
+import { PlusGlyph } from "../../../components/ui/plus-glyph.tsx";
+import { TextField } from "../../../components/ui/text-field.tsx";
+import { workOrderListQueryOptions } from "../api/list-work-orders.ts";
+import { WorkOrderRows } from "./work-order-rows.tsx";
+
+const searchDelayMs = 300;
+const showChoices = [
+  { value: "open", label: "Open" },
+  { value: "all", label: "All, with picked up" },
+] as const;
+
+// "WO 1042" is how people say it; the server searches the bare number.
+function searchTerm(q: string) {
+  return q.trim().replace(/^wo\s*(\d+)$/i, "$1");
+}
+
+export function WorkOrderListPage() {
+  const [params, setParams] = useSearchParams();
+  const q = params.get("q") ?? "";
+  const state = params.get("state") === "all" ? "all" : "open";
+  const [typed, setTyped] = useState(q);
+  const [seenQ, setSeenQ] = useState(q);
+  // The back button can change the address under the box: follow it rather than overwrite it.
+  if (q !== seenQ) {
+    setSeenQ(q);
+    setTyped(q);
+  }
+
+  // The address holds the search, so a reload or the back button brings it back.
+  useEffect(() => {
+    if (typed === q) return;
+    const timer = setTimeout(() => {
+      setParams((current) => {
+        const next = new URLSearchParams(current);
+        if (typed.trim() === "") next.delete("q");
+        else next.set("q", typed);
+        return next;
+      }, { replace: true });
+    }, searchDelayMs);
+    return () => clearTimeout(timer);
+  }, [typed, q, setParams]);
+
+  const setState = (value: "open" | "all") =>
+    setParams((current) => {
+      const next = new URLSearchParams(current);
+      if (value === "open") next.delete("state");
+      else next.set("state", value);
+      return next;
+    }, { replace: true });
+
+  const list = useQuery(workOrderListQueryOptions({ search: searchTerm(q), state }));
+
+  return (
+    <div className="flex max-w-5xl flex-col gap-6">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <h1 className="text-step font-semibold">Work orders</h1>
+        <Link to="/work-orders/new" className={buttonClasses({ variant: "primary", size: "main" })}>
+          <PlusGlyph />
+          Check in a unit
+        </Link>
+      </div>
+      <div role="search" className="grid gap-5 landscape:grid-cols-[1fr_auto] landscape:items-start">
+        <TextField
+          id="work-order-search"
+          label="Find a work order"
+          hint="Customer, make, model or number"
+          type="search"
+          autoComplete="off"
+          value={typed}
+          onChange={(event) => setTyped(event.currentTarget.value)}
+        />
+        <ChoiceGroup id="work-order-show" name="show" legend="Show" minChoiceWidth="narrow" choices={showChoices} value={state} onChange={setState} />
+      </div>
+      {list.isError ? (
+        <FormProblem title="The work orders did not load.">Check that this tablet is on the shop's network, then search again or reload.</FormProblem>
+      ) : list.isPending ? (
+        <p className="text-ink-muted">Loading work orders…</p>
+      ) : list.data.length === 0 ? (
+        <EmptyList search={q} state={state} onShowAll={() => setState("all")} />
+      ) : (
+        <WorkOrderRows workOrders={list.data} />
+      )}
+    </div>
+  );
+}
+
+function EmptyList({ search, state, onShowAll }: { search: string; state: "open" | "all"; onShowAll: () => void }) {
+  const searching = search.trim() !== "";
+  return (
+    <div className="flex flex-col items-start gap-3 rounded-xl border-2 border-dashed border-line-strong px-5 py-4">
+      <p className="font-semibold">{searching ? `No work order matches “${search.trim()}”.` : "No open work orders."}</p>
+      <p>
+        {searching
+          ? "Check the spelling, or search by the customer's surname or the number on the tag."
+          : "When a unit comes in, check it in: it shows up here until it is picked up."}
+      </p>
+      {state === "open" && searching && (
+        <button type="button" className={buttonClasses({ variant: "secondary" })} onClick={onShowAll}>
+          Search picked-up work orders too
+        </button>
+      )}
+    </div>
+  );
+}
