@@ -12,7 +12,7 @@ const SIZES = [100, 1000, 10_000] as const;
 // every size (the 100-step flow reaches its finding sooner). The per-event cost is printed too.
 const MAX_EVENTS = 100;
 const WARM_UP = 10;
-const RUNS = 15;
+const RUNS = 21;
 
 const input: FlowInput = { profile: { cycle: 2, compressionRelease: "no", displacementCc: 45 }, altitudeM: 350 };
 

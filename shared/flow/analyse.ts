@@ -40,6 +40,7 @@ export interface AnalysisEnv {
   stack: string[];
 }
 
+
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
 function formatPath(path: readonly PropertyKey[]): string {
@@ -56,9 +57,9 @@ export function schemaProblems(stepId: string | null, issues: readonly z.core.$Z
 const whereAt = (step: FlowStep | null, lenient: StepTarget[] | null, k: number) => (step ? whereOf(step, k) : lenient![k]!.where);
 
 function summaryOf(sectionId: string, callerStepId: string, problems: Problem[], env: AnalysisEnv): SectionSummary {
-  const onStack = env.stack.indexOf(sectionId);
-  if (onStack >= 0) {
-    const chain = [...env.stack.slice(onStack), sectionId].map((s) => `"${s}"`).join(" → ");
+  // The stack is as deep as sections nest, a few at most: a look along it beats keeping a set too.
+  if (env.stack.includes(sectionId)) {
+    const chain = [...env.stack.slice(env.stack.indexOf(sectionId)), sectionId].map((s) => `"${s}"`).join(" → ");
     problems.push(error(callerStepId, "section_cycle", `section "${sectionId}" includes itself: ${chain}`));
     return OPTIMISTIC;
   }
@@ -127,7 +128,8 @@ export function analyseDocument(raw: unknown, mode: "flow" | "section", env: Ana
       finish = finish || summary.canFinish;
       if (!summary.canContinue) {
         followNext = false;
-        problems.push(warning(id, "section_never_continues", `section "${step.section}" always ends in a finding, so next "${step.next}" is never used`));
+        const ends = summary.canFinish ? "always ends in a finding" : "never hands back";
+        problems.push(warning(id, "section_never_continues", `section "${step.section}" ${ends}, so next "${step.next}" is never used`));
       }
     }
     let continuesHere = step === null;
