@@ -1,10 +1,13 @@
-import type { PublicUser } from "../../shared/schemas/users.ts";
+import type { PublicUser, Role } from "../../shared/schemas/users.ts";
 import { forbidden } from "../lib/errors.ts";
 
 /** A record a policy can look at: who owns it, when ownership matters. */
 export interface OwnedRecord {
   ownerId?: string | null;
 }
+
+const intakeRoles: readonly Role[] = ["apprentice", "senior_tech", "shop_lead"];
+const benchRoles: readonly Role[] = ["apprentice", "senior_tech", "shop_lead"];
 
 type Policy = (user: PublicUser, record: OwnedRecord | null) => boolean;
 
@@ -14,6 +17,14 @@ const policies: Record<string, Policy> = {
   "user.manage": (user) => user.role === "shop_lead",
   "settings.read": () => true,
   "settings.update": (user) => user.role === "shop_lead",
+  "work_order.read": () => true,
+  "work_order.create": (user) => intakeRoles.includes(user.role),
+  "work_order.update": (user) => intakeRoles.includes(user.role),
+  "session.create": (user) => benchRoles.includes(user.role),
+  // Only the tech running a session adds to it or finishes it.
+  "session.append": (user, record) => record?.ownerId === user.id,
+  "session.read": (user, record) => record?.ownerId === user.id || user.role === "senior_tech" || user.role === "shop_lead",
+  "session.abandon": (user, record) => record?.ownerId === user.id || user.role === "shop_lead",
 };
 
 export type Action = keyof typeof policies;

@@ -2,6 +2,9 @@ import type { Router } from "express";
 import type { AppContext } from "../context.ts";
 import { authRouter } from "./auth/router.ts";
 import { healthRouter } from "./health/router.ts";
+import { workOrdersRouter } from "./work-orders/router.ts";
+import { sessionsRouter } from "./sessions/router.ts";
+import { benchRouter } from "./sessions/bench-router.ts";
 
 export interface ApiResource {
   base: string;
@@ -13,6 +16,9 @@ export function apiResources(ctx: AppContext): ApiResource[] {
   return [
     { base: "/api/health", router: healthRouter(ctx) },
     { base: "/api/auth", router: authRouter(ctx) },
+    { base: "/api/work-orders", router: workOrdersRouter(ctx) },
+    { base: "/api/sessions", router: sessionsRouter(ctx) },
+    { base: "/api/bench", router: benchRouter(ctx) },
   ];
 }
 

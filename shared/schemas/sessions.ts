@@ -59,3 +59,31 @@ export const appendEventResponseSchema = z.object({
   currentStepId: z.string(),
   findingStepId: z.string().nullable(),
 });
+
+/** The multipart `stepId` field of POST /api/sessions/:id/photos. */
+export const sessionPhotoFieldsSchema = z.object({ stepId: z.string().min(1, { error: "Name the step the photo is for." }).max(800) });
+
+/** What an upload answers; the tablet then appends a photo.attach event naming the id. */
+export const uploadedPhotoSchema = z.object({ id: z.string(), width: z.number().int(), height: z.number().int(), url: z.string(), thumbUrl: z.string() });
+export type UploadedPhoto = z.infer<typeof uploadedPhotoSchema>;
+
+export const benchSessionSchema = z.object({
+  sessionId: z.string(),
+  workOrderId: z.string(),
+  workOrderNumber: z.number().int(),
+  unit: z.object({ equipmentKind: z.string(), make: z.string(), model: z.string() }),
+  flowTitle: z.string(),
+  currentStepId: z.string(),
+  currentStepTitle: z.string(),
+  reviewComment: z.string().nullable(),
+  startedAt: z.string(),
+});
+export type BenchSession = z.infer<typeof benchSessionSchema>;
+
+/** GET /api/bench/home — the signed-in tech's own sessions. */
+export const benchHomeResponseSchema = z.object({
+  open: z.array(benchSessionSchema),
+  waitingForReview: z.array(benchSessionSchema),
+  returned: z.array(benchSessionSchema),
+});
+export type BenchHomeResponse = z.infer<typeof benchHomeResponseSchema>;

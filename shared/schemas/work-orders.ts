@@ -121,3 +121,9 @@ export const workOrderDetailSchema = workOrderSummarySchema.extend({
   applicableFlows: z.array(z.object({ flowId: z.string(), title: z.string(), summary: z.string(), version: z.number().int() })),
 });
 export type WorkOrderDetail = z.infer<typeof workOrderDetailSchema>;
+
+/** A record's id in a path: uuids only, so a malformed id is a clear 400, not a database error. */
+export const idParamsSchema = z.object({ id: z.uuid({ error: "the id in the path is not a valid id" }) });
+
+export const workOrderListResponseSchema = z.object({ workOrders: z.array(workOrderSummarySchema) });
+export type WorkOrderListResponse = z.infer<typeof workOrderListResponseSchema>;

@@ -2,12 +2,22 @@ import type { Role } from "../../shared/schemas/users.ts";
 
 export type Who = "anonymous" | Role;
 
+/** Records made before the matrix runs: one session of each role's own, and one of another apprentice's. */
+export interface AccessFixtures {
+  workOrderId: string;
+  ownSessionId: Record<Role, string>;
+  foreignSessionId: string;
+}
+const own = (f: AccessFixtures, who: Who) => f.ownSessionId[who === "anonymous" ? "apprentice" : who];
+/** A valid event for the session's first step that the flow refuses: it reaches the policy and the replay, and stores nothing. */
+const forgedEvent = { id: "0190f0c0-0000-7000-8000-00000000f001", seq: 1, recordedAt: "2025-01-01T00:00:00.000Z", event: { type: "step.answer", stepId: "spark/flash", value: "every" } };
+
 export interface AccessRow {
   method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
   /** The route as registered, e.g. /api/work-orders/:id */
   route: string;
-  /** The concrete path requested; defaults to the route. */
-  path?: string;
+  /** The concrete path requested (or made from the fixtures and the caller); defaults to the route. */
+  path?: string | ((f: AccessFixtures, who: Who) => string);
   body?: unknown;
   /** Whether the request ends the caller's session (the test signs in again afterwards). */
   endsSession?: boolean;
@@ -25,4 +35,21 @@ export const accessMatrix: AccessRow[] = [
   { method: "GET", route: "/api/auth/me", expect: signedIn(200) },
   // Signed-in callers get as far as validation; the anonymous caller is stopped before it.
   { method: "POST", route: "/api/auth/password", body: {}, expect: signedIn(400) },
+
+  { method: "GET", route: "/api/work-orders", expect: signedIn(200) },
+  { method: "POST", route: "/api/work-orders", body: {}, expect: signedIn(400) },
+  { method: "GET", route: "/api/work-orders/:id", path: (f) => `/api/work-orders/${f.workOrderId}`, expect: signedIn(200) },
+  { method: "POST", route: "/api/work-orders/:id/sessions", path: (f) => `/api/work-orders/${f.workOrderId}/sessions`, body: {}, expect: signedIn(400) },
+
+  { method: "GET", route: "/api/sessions/:id", path: (f, who) => `/api/sessions/${own(f, who)}`, expect: signedIn(200) },
+  { method: "GET", route: "/api/sessions/:id", path: (f) => `/api/sessions/${f.foreignSessionId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
+  { method: "POST", route: "/api/sessions/:id/events", path: (f, who) => `/api/sessions/${own(f, who)}/events`, body: forgedEvent, expect: signedIn(422) },
+  { method: "POST", route: "/api/sessions/:id/events", path: (f) => `/api/sessions/${f.foreignSessionId}/events`, body: forgedEvent, expect: signedIn(404) },
+  { method: "POST", route: "/api/sessions/:id/complete", path: (f, who) => `/api/sessions/${own(f, who)}/complete`, expect: signedIn(422) },
+  { method: "POST", route: "/api/sessions/:id/complete", path: (f) => `/api/sessions/${f.foreignSessionId}/complete`, expect: signedIn(404) },
+  { method: "POST", route: "/api/sessions/:id/abandon", path: (f, who) => `/api/sessions/${own(f, who)}/abandon`, body: {}, expect: signedIn(400) },
+  // Last of the session rows: the shop lead really abandons the foreign session.
+  { method: "POST", route: "/api/sessions/:id/abandon", path: (f) => `/api/sessions/${f.foreignSessionId}/abandon`, body: { reason: "Matrix check" }, expect: { anonymous: 401, apprentice: 404, senior_tech: 404, shop_lead: 200 } },
+
+  { method: "GET", route: "/api/bench/home", expect: signedIn(200) },
 ];

@@ -1,13 +1,25 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type TestApp } from "./helpers/test-app.ts";
-import { signedInAs } from "./helpers/sign-in.ts";
-import { accessMatrix, type Who } from "./access-matrix.ts";
+import { accessMatrix, type AccessFixtures, type Who } from "./access-matrix.ts";
+import { buildUser } from "../factories/users.ts";
+import { buildSession } from "../factories/sessions.ts";
+import { buildWorkOrder } from "../factories/work-orders.ts";
+import { installBuiltInFlows } from "../../server/services/flows.ts";
+import type { Role } from "../../shared/schemas/users.ts";
 import { apiResources, listRoutes } from "../../server/routes/index.ts";
 import { roles } from "../../shared/schemas/users.ts";
 
 let t: TestApp;
+let fixtures: AccessFixtures;
+const users = new Map<Role, Awaited<ReturnType<typeof buildUser>>>();
 beforeAll(async () => {
   t = await createTestApp();
+  await installBuiltInFlows(t.ctx.db);
+  for (const role of roles) users.set(role, await buildUser(t.ctx.db, { role }));
+  const workOrderId = (await buildWorkOrder(t.ctx.db)).id;
+  const ownSessionId = {} as Record<Role, string>;
+  for (const role of roles) ownSessionId[role] = (await buildSession(t.ctx.db, { techId: users.get(role)!.id })).id;
+  fixtures = { workOrderId, ownSessionId, foreignSessionId: (await buildSession(t.ctx.db)).id };
 });
 afterAll(() => t.close());
 
@@ -22,14 +34,20 @@ describe("access matrix", () => {
     const agents = new Map<Who, ReturnType<TestApp["agent"]>>();
     const agentFor = async (who: Who) => {
       if (who === "anonymous") return t.agent();
-      if (!agents.has(who)) agents.set(who, (await signedInAs(t, who)).agent);
+      if (!agents.has(who)) {
+        const user = users.get(who)!;
+        const agent = t.agent();
+        const res = await agent.post("/api/auth/sign-in").send({ email: user.email, password: user.password });
+        if (res.status !== 200) throw new Error(`sign-in as ${who} failed: ${res.status}`);
+        agents.set(who, agent);
+      }
       return agents.get(who)!;
     };
     const mismatches: string[] = [];
     for (const row of accessMatrix) {
       for (const who of ["anonymous", ...roles] as Who[]) {
         const agent = await agentFor(who);
-        const path = row.path ?? row.route;
+        const path = typeof row.path === "function" ? row.path(fixtures, who) : (row.path ?? row.route);
         const method = row.method.toLowerCase() as "get" | "post" | "put" | "patch" | "delete";
         const res = await agent[method](path).send(row.body as object);
         if (res.status !== row.expect[who]) mismatches.push(`${row.method} ${path} as ${who}: expected ${row.expect[who]}, got ${res.status}`);

@@ -1,0 +1,41 @@
+import { Router, type Request, type Response } from "express";
+import type { z } from "zod";
+import type { AppContext } from "../../context.ts";
+import { validate } from "../../lib/validate.ts";
+import { currentUser, requireUser } from "../../auth/middleware.ts";
+import { getSessionDetail } from "../../services/sessions.ts";
+import { appendEvent } from "../../services/session-events.ts";
+import { abandonSession, completeSession } from "../../services/session-end.ts";
+import { idParamsSchema } from "../../../shared/schemas/work-orders.ts";
+import { abandonSessionRequestSchema, appendEventRequestSchema, type AppendEventRequest } from "../../../shared/schemas/sessions.ts";
+
+type Id = z.output<typeof idParamsSchema>;
+const idOf = (res: Response) => (res.locals.params as Id).id;
+
+// Who may do what to a session is decided by the named policies inside the services (session.read, session.append, session.abandon).
+export function sessionsRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get("/:id", requireUser, validate({ params: idParamsSchema }), async (_req: Request, res: Response) => {
+    res.json(await getSessionDetail(ctx, currentUser(res), idOf(res)));
+  });
+
+  router.post("/:id/events", requireUser, validate({ params: idParamsSchema, body: appendEventRequestSchema }), async (req: Request, res: Response) => {
+    const result = await appendEvent(ctx, currentUser(res), idOf(res), req.body as AppendEventRequest);
+    res.status(result.stored ? 201 : 200).json(result);
+  });
+
+  router.post("/:id/complete", requireUser, validate({ params: idParamsSchema }), async (_req: Request, res: Response) => {
+    const user = currentUser(res);
+    await completeSession(ctx, user, idOf(res));
+    res.json(await getSessionDetail(ctx, user, idOf(res)));
+  });
+
+  router.post("/:id/abandon", requireUser, validate({ params: idParamsSchema, body: abandonSessionRequestSchema }), async (req: Request, res: Response) => {
+    const user = currentUser(res);
+    await abandonSession(ctx, user, idOf(res), (req.body as z.output<typeof abandonSessionRequestSchema>).reason);
+    res.json(await getSessionDetail(ctx, user, idOf(res)));
+  });
+
+  return router;
+}

@@ -1,0 +1,45 @@
+import { Router, type Request, type Response } from "express";
+import type { z } from "zod";
+import type { AppContext } from "../../context.ts";
+import { validate } from "../../lib/validate.ts";
+import { currentUser, requireUser } from "../../auth/middleware.ts";
+import { authorize } from "../../auth/policies.ts";
+import { createWorkOrder, listWorkOrders } from "../../services/work-orders.ts";
+import { getWorkOrderDetail } from "../../services/work-order-detail.ts";
+import { getSessionDetail, startSession } from "../../services/sessions.ts";
+import { createWorkOrderRequestSchema, idParamsSchema, listWorkOrdersQuerySchema, type WorkOrderListResponse } from "../../../shared/schemas/work-orders.ts";
+import { createSessionRequestSchema } from "../../../shared/schemas/sessions.ts";
+
+type Id = z.output<typeof idParamsSchema>;
+
+export function workOrdersRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get("/", requireUser, validate({ query: listWorkOrdersQuerySchema }), async (_req: Request, res: Response) => {
+    authorize(currentUser(res), "work_order.read");
+    const body: WorkOrderListResponse = { workOrders: await listWorkOrders(ctx, res.locals.query as z.output<typeof listWorkOrdersQuerySchema>) };
+    res.json(body);
+  });
+
+  router.post("/", requireUser, validate({ body: createWorkOrderRequestSchema }), async (req: Request, res: Response) => {
+    const user = currentUser(res);
+    authorize(user, "work_order.create");
+    const id = await createWorkOrder(ctx, user, req.body as z.output<typeof createWorkOrderRequestSchema>);
+    res.status(201).json(await getWorkOrderDetail(ctx, id));
+  });
+
+  router.get("/:id", requireUser, validate({ params: idParamsSchema }), async (_req: Request, res: Response) => {
+    authorize(currentUser(res), "work_order.read");
+    res.json(await getWorkOrderDetail(ctx, (res.locals.params as Id).id));
+  });
+
+  router.post("/:id/sessions", requireUser, validate({ params: idParamsSchema, body: createSessionRequestSchema }), async (req: Request, res: Response) => {
+    const user = currentUser(res);
+    authorize(user, "session.create");
+    const { flowId } = req.body as z.output<typeof createSessionRequestSchema>;
+    const id = await startSession(ctx, user, (res.locals.params as Id).id, flowId);
+    res.status(201).json(await getSessionDetail(ctx, user, id));
+  });
+
+  return router;
+}
