@@ -17,17 +17,23 @@ interface ChoiceGroupProps<T extends string | number> {
   onChange: (value: T) => void;
   onBlur?: () => void;
   error?: string;
-  /** Narrowest a choice may get; the row wraps when the screen is narrow. */
-  minChoiceWidth?: "narrow" | "wide";
+  /** Narrowest a choice may get; "fit" keeps short choices in one row at their own width. */
+  minChoiceWidth?: "fit" | "narrow" | "wide";
   ref?: Ref<HTMLInputElement>;
 }
+
+const layouts = {
+  fit: "flex flex-wrap gap-3 [&>label]:min-w-32",
+  narrow: "grid gap-3 grid-cols-[repeat(auto-fill,minmax(9.5rem,1fr))]",
+  wide: "grid gap-3 grid-cols-[repeat(auto-fill,minmax(12rem,1fr))]",
+};
 
 /** One answer from a few, as big tiles a gloved thumb can hit; native radios underneath for keyboards and readers. */
 export function ChoiceGroup<T extends string | number>(props: ChoiceGroupProps<T>) {
   const { id, name, legend, hint, needed, choices, value, onChange, onBlur, error, minChoiceWidth = "wide", ref } = props;
   const errorId = `${id}-error`;
   const hintId = `${id}-hint`;
-  const columns = minChoiceWidth === "wide" ? "grid-cols-[repeat(auto-fill,minmax(11rem,1fr))]" : "grid-cols-[repeat(auto-fill,minmax(8rem,1fr))]";
+  const columns = layouts[minChoiceWidth];
   return (
     <fieldset
       id={id}
@@ -46,7 +52,7 @@ export function ChoiceGroup<T extends string | number>(props: ChoiceGroupProps<T
           {hint}
         </p>
       )}
-      <div className={`grid gap-3 ${columns}`}>
+      <div className={columns}>
         {choices.map((choice, index) => {
           const checked = value === choice.value;
           return (

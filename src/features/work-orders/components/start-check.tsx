@@ -42,10 +42,19 @@ export function StartCheck({ workOrder }: { workOrder: WorkOrderDetail }) {
                 type="button"
                 disabled={start.isPending}
                 onClick={() => void onStart(flow.flowId)}
-                className="flex min-h-20 w-full flex-col items-start gap-1 rounded-xl border-2 border-accent bg-accent px-6 py-4 text-left text-accent-ink disabled:opacity-70"
+                aria-labelledby={`flow-title-${flow.flowId}`}
+                aria-describedby={`flow-summary-${flow.flowId}`}
+                className="flex min-h-20 w-full items-center gap-4 rounded-xl border-2 border-accent bg-accent px-6 py-4 text-left text-accent-ink disabled:opacity-70"
               >
-                <span className="text-xl font-semibold">{start.isPending && start.variables === flow.flowId ? `Starting ${flow.title}…` : flow.title}</span>
-                <span className="text-base">{flow.summary}</span>
+                <span className="flex min-w-0 flex-1 flex-col gap-1">
+                  <span id={`flow-title-${flow.flowId}`} className="text-xl font-semibold">
+                    {start.isPending && start.variables === flow.flowId ? `Starting ${flow.title}…` : flow.title}
+                  </span>
+                  <span id={`flow-summary-${flow.flowId}`} className="text-base">
+                    {flow.summary}
+                  </span>
+                </span>
+                <StartGlyph />
               </button>
             </li>
           ))}
@@ -61,4 +70,12 @@ function startProblem(error: unknown) {
   }
   if (isApiRequestError(error) && error.status === 403) return "Your role cannot start checks. Ask an apprentice or a senior tech.";
   return "Something went wrong on the server. Press the check again; if it keeps happening, tell your shop lead.";
+}
+
+function StartGlyph() {
+  return (
+    <svg viewBox="0 0 24 24" className="size-9 shrink-0" aria-hidden="true" focusable="false">
+      <path d="M9 5l7 7-7 7" fill="none" strokeWidth="3" strokeLinecap="round" strokeLinejoin="round" className="stroke-current" />
+    </svg>
+  );
 }

@@ -1,3 +1,4 @@
+import { useEffect, useRef } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { Link, useLocation, useParams } from "react-router";
 import { ScreenProblemText } from "./screen-problem-text.tsx";
@@ -14,16 +15,26 @@ export function WorkOrderDetailPage() {
   const { workOrderId = "" } = useParams();
   const arrival = useLocation().state as IntakeArrival | null;
   const { data: workOrder, error } = useQuery(workOrderQueryOptions(workOrderId));
+  const top = useRef<HTMLDivElement>(null);
+  // Arriving from the long intake form leaves the page scrolled down: start at the top.
+  const loaded = workOrder !== undefined;
+  useEffect(() => {
+    if (!loaded) return;
+    top.current?.focus({ preventScroll: true });
+    document.documentElement.scrollTop = 0;
+  }, [loaded, workOrderId]);
   if (!workOrder) return error ? <ScreenProblemText /> : <p className="text-ink-muted">Loading the work order…</p>;
 
   return (
-    <div className="flex max-w-6xl flex-col gap-7">
+    <div ref={top} tabIndex={-1} className="flex max-w-6xl flex-col gap-7 focus:outline-none">
       <Link to="/work-orders" className="inline-flex min-h-12 items-center self-start font-semibold text-accent underline decoration-2 underline-offset-4">
         All work orders
       </Link>
       <div className="flex flex-col gap-2">
         <p className="text-xl font-semibold tabular-figures text-ink-muted">{workOrderNumber(workOrder.number)}</p>
-        <h1 className="text-step font-semibold">{unitName(workOrder)}</h1>
+        <h1 id="work-order-title" className="text-step font-semibold">
+          {unitName(workOrder)}
+        </h1>
         <div className="flex flex-wrap items-center gap-3">
           <StateLabel state={workOrder.state} />
           <span>for {workOrder.customer.name}</span>

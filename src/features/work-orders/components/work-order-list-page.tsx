@@ -1,5 +1,5 @@
 import { useEffect, useState } from "react";
-import { useQuery } from "@tanstack/react-query";
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { Link, useSearchParams } from "react-router";
 import { buttonClasses } from "../../../components/ui/button.tsx";
 import { ChoiceGroup } from "../../../components/ui/choice-group.tsx";
@@ -12,7 +12,7 @@ import { WorkOrderRows } from "./work-order-rows.tsx";
 const searchDelayMs = 300;
 const showChoices = [
   { value: "open", label: "Open" },
-  { value: "all", label: "All, with picked up" },
+  { value: "all", label: "All" },
 ] as const;
 
 // "WO 1042" is how people say it; the server searches the bare number.
@@ -54,11 +54,12 @@ export function WorkOrderListPage() {
       return next;
     }, { replace: true });
 
-  const list = useQuery(workOrderListQueryOptions({ search: searchTerm(q), state }));
+  // While a new search loads, the last answer stays up rather than flashing an empty screen.
+  const list = useQuery({ ...workOrderListQueryOptions({ search: searchTerm(q), state }), placeholderData: keepPreviousData });
 
   return (
     <div className="flex max-w-5xl flex-col gap-6">
-      <div className="flex flex-wrap items-end justify-between gap-4">
+      <div className="flex flex-wrap items-center justify-between gap-4">
         <h1 className="text-step font-semibold">Work orders</h1>
         <Link to="/work-orders/new" className={buttonClasses({ variant: "primary", size: "main" })}>
           <PlusGlyph />
@@ -74,8 +75,16 @@ export function WorkOrderListPage() {
           autoComplete="off"
           value={typed}
           onChange={(event) => setTyped(event.currentTarget.value)}
+          className="[&_input::-webkit-search-cancel-button]:appearance-none"
+          trailing={
+            typed !== "" && (
+              <button type="button" className={`${buttonClasses({ variant: "secondary" })} min-h-14`} onClick={() => setTyped("")}>
+                Clear
+              </button>
+            )
+          }
         />
-        <ChoiceGroup id="work-order-show" name="show" legend="Show" minChoiceWidth="narrow" choices={showChoices} value={state} onChange={setState} />
+        <ChoiceGroup id="work-order-show" name="show" legend="Show" hint="All includes picked up" minChoiceWidth="fit" choices={showChoices} value={state} onChange={setState} />
       </div>
       {list.isError ? (
         <FormProblem title="The work orders did not load.">Check that this tablet is on the shop's network, then search again or reload.</FormProblem>
