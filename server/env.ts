@@ -9,6 +9,8 @@ export const envSchema = z.object({
   HOST: z.string().min(1).default("0.0.0.0"),
   PORT: z.coerce.number({ error: "must be a number" }).int().min(0).max(65535).default(3000),
   DATA_DIR: z.string().min(1).default("./data"),
+  /** Where uploaded photos go; DATA_DIR/uploads when not set. */
+  UPLOADS_DIR: z.string().min(1).optional(),
   DATABASE_URL: z
     .string()
     .regex(/^postgres(ql)?:\/\/.+/, { error: "must start with postgres:// or postgresql://" })

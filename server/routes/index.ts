@@ -5,6 +5,7 @@ import { healthRouter } from "./health/router.ts";
 import { workOrdersRouter } from "./work-orders/router.ts";
 import { sessionsRouter } from "./sessions/router.ts";
 import { benchRouter } from "./sessions/bench-router.ts";
+import { attachmentsRouter } from "./attachments/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -19,6 +20,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/work-orders", router: workOrdersRouter(ctx) },
     { base: "/api/sessions", router: sessionsRouter(ctx) },
     { base: "/api/bench", router: benchRouter(ctx) },
+    { base: "/api/attachments", router: attachmentsRouter(ctx) },
   ];
 }
 

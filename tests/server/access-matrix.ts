@@ -7,6 +7,9 @@ export interface AccessFixtures {
   workOrderId: string;
   ownSessionId: Record<Role, string>;
   foreignSessionId: string;
+  /** A work order's intake photo, and a photo on the foreign session. */
+  workOrderPhotoId: string;
+  foreignPhotoId: string;
 }
 const own = (f: AccessFixtures, who: Who) => f.ownSessionId[who === "anonymous" ? "apprentice" : who];
 /** A valid event for the session's first step that the flow refuses: it reaches the policy and the replay, and stores nothing. */
@@ -40,6 +43,8 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/work-orders", body: {}, expect: signedIn(400) },
   { method: "GET", route: "/api/work-orders/:id", path: (f) => `/api/work-orders/${f.workOrderId}`, expect: signedIn(200) },
   { method: "POST", route: "/api/work-orders/:id/sessions", path: (f) => `/api/work-orders/${f.workOrderId}/sessions`, body: {}, expect: signedIn(400) },
+  // Without a file: every role gets past the policy to the missing photo.
+  { method: "POST", route: "/api/work-orders/:id/intake-photo", path: (f) => `/api/work-orders/${f.workOrderId}/intake-photo`, expect: signedIn(400) },
 
   { method: "GET", route: "/api/sessions/:id", path: (f, who) => `/api/sessions/${own(f, who)}`, expect: signedIn(200) },
   { method: "GET", route: "/api/sessions/:id", path: (f) => `/api/sessions/${f.foreignSessionId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
@@ -48,6 +53,12 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/sessions/:id/complete", path: (f, who) => `/api/sessions/${own(f, who)}/complete`, expect: signedIn(422) },
   { method: "POST", route: "/api/sessions/:id/complete", path: (f) => `/api/sessions/${f.foreignSessionId}/complete`, expect: signedIn(404) },
   { method: "POST", route: "/api/sessions/:id/abandon", path: (f, who) => `/api/sessions/${own(f, who)}/abandon`, body: {}, expect: signedIn(400) },
+  { method: "POST", route: "/api/sessions/:id/photos", path: (f, who) => `/api/sessions/${own(f, who)}/photos`, expect: signedIn(400) },
+  { method: "POST", route: "/api/sessions/:id/photos", path: (f) => `/api/sessions/${f.foreignSessionId}/photos`, expect: signedIn(404) },
+  { method: "GET", route: "/api/attachments/:id", path: (f) => `/api/attachments/${f.workOrderPhotoId}`, expect: signedIn(200) },
+  { method: "GET", route: "/api/attachments/:id", path: (f) => `/api/attachments/${f.foreignPhotoId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
+  { method: "GET", route: "/api/attachments/:id/thumb", path: (f) => `/api/attachments/${f.workOrderPhotoId}/thumb`, expect: signedIn(200) },
+  { method: "GET", route: "/api/attachments/:id/thumb", path: (f) => `/api/attachments/${f.foreignPhotoId}/thumb`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
   // Last of the session rows: the shop lead really abandons the foreign session.
   { method: "POST", route: "/api/sessions/:id/abandon", path: (f) => `/api/sessions/${f.foreignSessionId}/abandon`, body: { reason: "Matrix check" }, expect: { anonymous: 401, apprentice: 404, senior_tech: 404, shop_lead: 200 } },
 

@@ -1,27 +1,42 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import { createTestApp, type TestApp } from "./helpers/test-app.ts";
 import { accessMatrix, type AccessFixtures, type Who } from "./access-matrix.ts";
 import { buildUser } from "../factories/users.ts";
 import { buildSession } from "../factories/sessions.ts";
 import { buildWorkOrder } from "../factories/work-orders.ts";
 import { installBuiltInFlows } from "../../server/services/flows.ts";
+import { savePhoto } from "../../server/services/attachments.ts";
+import { makeImage } from "../factories/images.ts";
 import type { Role } from "../../shared/schemas/users.ts";
 import { apiResources, listRoutes } from "../../server/routes/index.ts";
 import { roles } from "../../shared/schemas/users.ts";
 
 let t: TestApp;
+let uploads: string;
 let fixtures: AccessFixtures;
 const users = new Map<Role, Awaited<ReturnType<typeof buildUser>>>();
 beforeAll(async () => {
-  t = await createTestApp();
+  uploads = mkdtempSync(path.join(tmpdir(), "bp-access-"));
+  t = await createTestApp({ UPLOADS_DIR: uploads });
   await installBuiltInFlows(t.ctx.db);
   for (const role of roles) users.set(role, await buildUser(t.ctx.db, { role }));
   const workOrderId = (await buildWorkOrder(t.ctx.db)).id;
   const ownSessionId = {} as Record<Role, string>;
   for (const role of roles) ownSessionId[role] = (await buildSession(t.ctx.db, { techId: users.get(role)!.id })).id;
-  fixtures = { workOrderId, ownSessionId, foreignSessionId: (await buildSession(t.ctx.db)).id };
+  const foreign = await buildSession(t.ctx.db);
+  const lead = { ...users.get("shop_lead")!, role: "shop_lead" as const };
+  const png = await makeImage("png");
+  const workOrderPhotoId = (await savePhoto(t.ctx, lead, { type: "work_order", id: workOrderId, stepId: null }, png)).id;
+  const foreignPhotoId = (await savePhoto(t.ctx, lead, { type: "session", id: foreign.id, stepId: "prepare/as-received" }, png)).id;
+  fixtures = { workOrderId, ownSessionId, foreignSessionId: foreign.id, workOrderPhotoId, foreignPhotoId };
 });
-afterAll(() => t.close());
+afterAll(async () => {
+  await t.close();
+  rmSync(uploads, { recursive: true, force: true });
+});
 
 describe("access matrix", () => {
   it("lists every route the app registers, and nothing it does not", () => {

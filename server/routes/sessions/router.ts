@@ -3,11 +3,15 @@ import type { z } from "zod";
 import type { AppContext } from "../../context.ts";
 import { validate } from "../../lib/validate.ts";
 import { currentUser, requireUser } from "../../auth/middleware.ts";
-import { getSessionDetail } from "../../services/sessions.ts";
+import { getSessionDetail, sessionFor } from "../../services/sessions.ts";
+import { savePhoto } from "../../services/attachments.ts";
+import { compiledVersion } from "../../services/flows.ts";
+import { conflict, unprocessable } from "../../lib/errors.ts";
+import { photoUpload } from "../attachments/upload.ts";
 import { appendEvent } from "../../services/session-events.ts";
 import { abandonSession, completeSession } from "../../services/session-end.ts";
 import { idParamsSchema } from "../../../shared/schemas/work-orders.ts";
-import { abandonSessionRequestSchema, appendEventRequestSchema, type AppendEventRequest } from "../../../shared/schemas/sessions.ts";
+import { abandonSessionRequestSchema, appendEventRequestSchema, sessionPhotoFieldsSchema, type AppendEventRequest } from "../../../shared/schemas/sessions.ts";
 
 type Id = z.output<typeof idParamsSchema>;
 const idOf = (res: Response) => (res.locals.params as Id).id;
@@ -35,6 +39,20 @@ export function sessionsRouter(ctx: AppContext): Router {
     const user = currentUser(res);
     await abandonSession(ctx, user, idOf(res), (req.body as z.output<typeof abandonSessionRequestSchema>).reason);
     res.json(await getSessionDetail(ctx, user, idOf(res)));
+  });
+
+  // Only the session's own tech, on an open session, gets as far as sending the file.
+  const photoTarget = async (_req: Request, res: Response, next: () => void) => {
+    const session = await sessionFor(ctx.db, currentUser(res), idOf(res), "session.append");
+    if (session.status !== "open") throw conflict("session_closed", "This session is already completed or abandoned; it takes no more photos.");
+    res.locals.flowVersionId = session.flowVersionId;
+    next();
+  };
+  router.post("/:id/photos", requireUser, validate({ params: idParamsSchema }), photoTarget, photoUpload, validate({ body: sessionPhotoFieldsSchema }), async (req: Request, res: Response) => {
+    const { stepId } = req.body as z.output<typeof sessionPhotoFieldsSchema>;
+    const flow = await compiledVersion(ctx.db, res.locals.flowVersionId as string);
+    if (!flow.steps[stepId]) throw unprocessable("unknown_step", `"${stepId}" is not a step of this session's flow.`, { stepId });
+    res.status(201).json(await savePhoto(ctx, currentUser(res), { type: "session", id: idOf(res), stepId }, req.file!.buffer));
   });
 
   return router;

@@ -5,7 +5,9 @@ import { validate } from "../../lib/validate.ts";
 import { currentUser, requireUser } from "../../auth/middleware.ts";
 import { authorize } from "../../auth/policies.ts";
 import { createWorkOrder, listWorkOrders } from "../../services/work-orders.ts";
-import { getWorkOrderDetail } from "../../services/work-order-detail.ts";
+import { findWorkOrder, getWorkOrderDetail } from "../../services/work-order-detail.ts";
+import { savePhoto } from "../../services/attachments.ts";
+import { photoUpload } from "../attachments/upload.ts";
 import { getSessionDetail, startSession } from "../../services/sessions.ts";
 import { createWorkOrderRequestSchema, idParamsSchema, listWorkOrdersQuerySchema, type WorkOrderListResponse } from "../../../shared/schemas/work-orders.ts";
 import { createSessionRequestSchema } from "../../../shared/schemas/sessions.ts";
@@ -39,6 +41,17 @@ export function workOrdersRouter(ctx: AppContext): Router {
     const { flowId } = req.body as z.output<typeof createSessionRequestSchema>;
     const id = await startSession(ctx, user, (res.locals.params as Id).id, flowId);
     res.status(201).json(await getSessionDetail(ctx, user, id));
+  });
+
+  // The work order is checked before the upload is read, so a refused caller sends no bytes anywhere.
+  const intakePhotoTarget = async (_req: Request, res: Response, next: () => void) => {
+    authorize(currentUser(res), "work_order.update");
+    await findWorkOrder(ctx, (res.locals.params as Id).id);
+    next();
+  };
+  router.post("/:id/intake-photo", requireUser, validate({ params: idParamsSchema }), intakePhotoTarget, photoUpload, async (req: Request, res: Response) => {
+    const owner = { type: "work_order" as const, id: (res.locals.params as Id).id, stepId: null };
+    res.status(201).json(await savePhoto(ctx, currentUser(res), owner, req.file!.buffer));
   });
 
   return router;
