@@ -2,8 +2,8 @@
 //
 // Why one state per step KIND (instruction, choice, reading, finding) and not one per step: XState
 // formats every transition of every state when the machine is created, and a machine with one state
-// per step took about 45 ms to build for 1,000 steps here (1.2 s for 10,000), over the whole 20 ms
-// budget for validate + compile + replay. With one state per kind the machine has a fixed size, the
+// per step took 40 ms or more to build for 1,000 steps here (over a second for 10,000), more than
+// the whole 20 ms budget for validate + compile + replay. With one state per kind the machine has a fixed size, the
 // step itself lives in context (path), guards read the compiled step map, and hasTag, can() and
 // final states work as before: a finding is still a final state tagged "finding".
 import { assign, setup } from "xstate";
