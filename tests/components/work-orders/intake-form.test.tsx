@@ -116,6 +116,23 @@ describe("checking in a unit", () => {
     expect(uploads[0]!.get("photo")).toBe(photo);
   });
 
+  it("still opens the new work order when its photo does not save, and says to take it again", async () => {
+    stubApi(
+      apprentice,
+      answers("POST", "/api/work-orders", () => json(buildDetail({ id: "wo-77" }), { status: 201 })),
+      answers("POST", "/api/work-orders/wo-77/intake-photo", () => json({ error: { id: "too_large", message: "Too big." } }, { status: 413 })),
+    );
+    const { router } = await openIntake();
+    const user = userEvent.setup();
+    await fillValid(user);
+    await user.upload(screen.getByLabelText("Take a photo"), new File(["x"], "unit.jpg", { type: "image/jpeg" }));
+    await user.click(screen.getByRole("button", { name: "Check in" }));
+
+    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"));
+    expect(await screen.findByRole("alert")).toHaveTextContent("Checked in, but the photo of the unit did not save.");
+    expect(screen.getByLabelText("Take a photo")).toHaveAccessibleDescription("The photo taken at check-in did not save: take it again, then save it.");
+  });
+
   it("puts the server's message for a field beside that field", async () => {
     stubApi(
       apprentice,

@@ -1,15 +1,12 @@
 import { queryOptions } from "@tanstack/react-query";
-import { z } from "zod";
-import { workOrderSummarySchema } from "../../../../shared/schemas/work-orders.ts";
+import { workOrderListResponseSchema } from "../../../../shared/schemas/work-orders.ts";
 import { apiFetch } from "../../../lib/api-client.ts";
 import { workOrderKeys, type WorkOrderListFilters } from "./keys.ts";
-
-const listResponseSchema = z.object({ workOrders: z.array(workOrderSummarySchema) });
 
 export async function listWorkOrders({ search, state }: WorkOrderListFilters, signal?: AbortSignal) {
   const params = new URLSearchParams({ state });
   if (search.trim() !== "") params.set("search", search.trim());
-  const { workOrders } = await apiFetch(`/api/work-orders?${params.toString()}`, { signal, schema: listResponseSchema });
+  const { workOrders } = await apiFetch(`/api/work-orders?${params.toString()}`, { signal, schema: workOrderListResponseSchema });
   return workOrders;
 }
 

@@ -28,11 +28,8 @@ export function IntakePhoto({ workOrderId, photoId, notSaved }: { workOrderId: s
         <p className="text-ink-muted">A photo is saved, but it cannot be shown on this tablet right now.</p>
       ) : (
         <>
-          {notSaved && !upload.isSuccess && (
-            <FormProblem title="The work order is checked in, but its photo did not save.">Take it again here, then save it.</FormProblem>
-          )}
           {upload.isError && <FormProblem title="The photo did not save.">Check the tablet's connection, then save it again.</FormProblem>}
-          <PhotoPicker label="Take a photo" hint="No photo of the unit as received yet." photo={photo} onChange={setPhoto} disabled={upload.isPending} />
+          <PhotoPicker label="Take a photo" hint={notSaved ? "The photo taken at check-in did not save: take it again, then save it." : "No photo of the unit as received yet."} photo={photo} onChange={setPhoto} disabled={upload.isPending} />
           {photo && (
             <Button variant="secondary" disabled={upload.isPending} onClick={() => upload.mutate({ workOrderId, photo })} className="self-start">
               {upload.isPending ? "Saving the photo…" : "Save the photo"}

@@ -1,6 +1,7 @@
 import { useEffect, useRef } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { Link, useLocation, useParams } from "react-router";
+import { FormProblem } from "../../../components/ui/form-message.tsx";
 import { ScreenProblemText } from "./screen-problem-text.tsx";
 import { workOrderQueryOptions } from "../api/get-work-order.ts";
 import { unitName, workOrderNumber } from "../lib/work-order-words.ts";
@@ -40,7 +41,10 @@ export function WorkOrderDetailPage() {
           <span>for {workOrder.customer.name}</span>
         </div>
       </div>
-      <div className="grid gap-8 landscape:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+      {arrival?.photoNotSaved && !workOrder.intakePhotoId && (
+        <FormProblem title="Checked in, but the photo of the unit did not save.">Take it again under “As received”.</FormProblem>
+      )}
+      <div className="grid gap-8 landscape:grid-cols-[minmax(0,1.2fr)_minmax(0,1fr)]">
         <div className="flex flex-col gap-8 landscape:order-2">
           <StartCheck workOrder={workOrder} />
           <SessionList sessions={workOrder.sessions} />

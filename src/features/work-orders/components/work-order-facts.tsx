@@ -16,7 +16,7 @@ function Facts({ title, id, rows }: { title: string; id: string; rows: [string, 
       <h2 id={id} className="text-2xl font-semibold">
         {title}
       </h2>
-      <dl className="grid grid-cols-[11rem_minmax(0,1fr)] gap-x-5 gap-y-2">
+      <dl className="grid grid-cols-[10rem_minmax(0,1fr)] gap-x-5 gap-y-2">
         {rows.map(([term, value]) => (
           <div key={term} className="contents">
             <dt className="text-ink-muted">{term}</dt>
