@@ -47,11 +47,12 @@ const cases = SIZES.map((size) => {
   const definition: unknown = JSON.parse(JSON.stringify(flow));
   return { size, definition, events: benchPath(flow, MAX_EVENTS), runs: [] as Run[] };
 });
-// Warm every size up first (a server lives long; the JIT settles), then measure one size at a time.
+// Warm every size up (a server lives long; the JIT settles), then measure one size at a time; a full
+// collection can drop compiled code and feedback, so each size warms up again after it.
 for (let i = 0; i < WARM_UP; i++) for (const c of cases) once(c.definition, c.events);
 for (const c of cases) {
   collect();
-  for (let i = 0; i < 3; i++) once(c.definition, c.events);
+  for (let i = 0; i < WARM_UP; i++) once(c.definition, c.events);
   for (let i = 0; i < RUNS; i++) c.runs.push(once(c.definition, c.events));
 }
 
