@@ -1,8 +1,12 @@
-import type { ReactNode } from "react";
+import { useEffect, type ReactNode } from "react";
 import { MutationCache, QueryCache, QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { PersistQueryClientProvider, type Persister } from "@tanstack/react-query-persist-client";
 import { meQueryOptions } from "../features/auth/api/get-me.ts";
+import { signOut } from "../features/auth/api/sign-out.ts";
+import { registerSessionEventDefaults } from "../features/session/api/append-event.ts";
 import { isApiRequestError } from "../lib/api-client.ts";
 import { MotionProvider } from "../lib/motion.tsx";
+import { PERSIST_MAX_AGE_MS, persistDehydrateOptions, resumeRestoredSaves } from "./query-persistence.ts";
 
 export function createQueryClient() {
   // Any 401 means the session has ended: the shell then sees no user and goes to sign-in.
@@ -16,9 +20,13 @@ export function createQueryClient() {
       queries: {
         staleTime: 30_000,
         retry: (failureCount, error) => failureCount < 2 && !isClientError(error),
+        // At least the persisted cache's age, or restored entries would be collected at once.
+        gcTime: PERSIST_MAX_AGE_MS,
       },
     },
   });
+  // Before any restore: saves taken back from storage need their function.
+  registerSessionEventDefaults(queryClient);
   return queryClient;
 }
 
@@ -27,10 +35,32 @@ function isClientError(error: unknown) {
   return isApiRequestError(error) && error.status >= 400 && error.status < 500;
 }
 
-export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
+// Nothing one person saw or typed may stay on the tablet's storage once they sign out.
+function useForgetOnSignOut(queryClient: QueryClient, persister: Persister | undefined) {
+  useEffect(() => {
+    if (!persister) return;
+    return queryClient.getMutationCache().subscribe((event) => {
+      if (event.type === "updated" && event.action.type === "success" && event.mutation.options.mutationFn === signOut) void persister.removeClient();
+    });
+  }, [queryClient, persister]);
+}
+
+export function AppProvider({ queryClient, persister, children }: { queryClient: QueryClient; persister?: Persister; children: ReactNode }) {
+  useForgetOnSignOut(queryClient, persister);
+  if (!persister) {
+    return (
+      <QueryClientProvider client={queryClient}>
+        <MotionProvider>{children}</MotionProvider>
+      </QueryClientProvider>
+    );
+  }
   return (
-    <QueryClientProvider client={queryClient}>
+    <PersistQueryClientProvider
+      client={queryClient}
+      persistOptions={{ persister, maxAge: PERSIST_MAX_AGE_MS, dehydrateOptions: persistDehydrateOptions }}
+      onSuccess={() => resumeRestoredSaves(queryClient)}
+    >
       <MotionProvider>{children}</MotionProvider>
-    </QueryClientProvider>
+    </PersistQueryClientProvider>
   );
 }

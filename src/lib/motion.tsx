@@ -28,9 +28,14 @@ export function MotionProvider({ children }: { children: ReactNode }) {
   );
 }
 
+/** True when the animation features failed to load, so animated content must render plainly. */
+export function useWithoutMotion(): boolean {
+  return useSyncExternalStore(subscribe, () => featuresFailed, () => false);
+}
+
 /** A short rise into place for a page's content; with reduced motion only the fade remains. */
 export function PageEnter({ children, className }: { children: ReactNode; className?: string }) {
-  const withoutMotion = useSyncExternalStore(subscribe, () => featuresFailed, () => false);
+  const withoutMotion = useWithoutMotion();
   if (withoutMotion) return <div className={className}>{children}</div>;
   return (
     <m.div

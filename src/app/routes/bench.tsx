@@ -1,5 +1,8 @@
-import { LaterReleasePanel } from "../../components/ui/later-release-panel.tsx";
+import { useQuery } from "@tanstack/react-query";
+import { useParams } from "react-router";
+import { meQueryOptions } from "../../features/auth/api/get-me.ts";
 import { BenchHome } from "../../features/bench/components/bench-home.tsx";
+import { SessionPage } from "../../features/session/components/session-page.tsx";
 import { WorkOrderQueue } from "../../features/work-orders/components/work-order-queue.tsx";
 
 export function BenchHomeRoute() {
@@ -7,10 +10,8 @@ export function BenchHomeRoute() {
 }
 
 export function SessionRoute() {
-  return (
-    <LaterReleasePanel
-      title="Guided check"
-      summary="The guided step screen comes next: it will walk through this check one step at a time, with readings, photos and safety panels."
-    />
-  );
+  const { sessionId = "" } = useParams();
+  // The shell has already loaded the signed-in user; their unit system picks each reading's first unit.
+  const me = useQuery(meQueryOptions());
+  return <SessionPage key={sessionId} sessionId={sessionId} unitSystem={me.data?.user.unitSystem ?? "metric"} />;
 }

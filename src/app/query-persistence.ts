@@ -1,0 +1,28 @@
+// The tablet keeps the query cache and unsent saves in IndexedDB, so answers survive a reload or a dead battery.
+import type { QueryClient } from "@tanstack/react-query";
+import { createAsyncStoragePersister } from "@tanstack/query-async-storage-persister";
+import type { Persister } from "@tanstack/react-query-persist-client";
+import { del, get, set } from "idb-keyval";
+
+/** A day: longer than a shift, short enough that an old cache never opens a stale check. */
+export const PERSIST_MAX_AGE_MS = 24 * 60 * 60 * 1000;
+
+export function createIdbPersister(): Persister {
+  return createAsyncStoragePersister({
+    storage: { getItem: (key) => get<string>(key).then((v) => v ?? null), setItem: (key, value) => set(key, value), removeItem: (key) => del(key) },
+    key: "benchpath-cache",
+    throttleTime: 500,
+  });
+}
+
+export const persistDehydrateOptions = {
+  // A save still retrying (server unreachable) is kept too, not only one paused by the browser's offline flag.
+  shouldDehydrateMutation: (mutation: { state: { status: string } }) => mutation.state.status === "pending",
+};
+
+/** Starts the saves restored from storage again, oldest first; saves of one session wait for each other. */
+export async function resumeRestoredSaves(queryClient: QueryClient) {
+  const restored = queryClient.getMutationCache().getAll().filter((m) => m.state.status === "pending" && !m.state.isPaused);
+  restored.forEach((m) => void m.continue().catch(() => undefined));
+  await queryClient.resumePausedMutations();
+}

@@ -1,0 +1,60 @@
+import { useMemo } from "react";
+import { Link } from "react-router";
+import { useQuery } from "@tanstack/react-query";
+import { compileFlow } from "../../../../shared/flow/compile.ts";
+import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
+import { buttonClasses } from "../../../components/ui/button.tsx";
+import { sessionQueryOptions } from "../api/get-session.ts";
+import { SessionRunner } from "./session-runner.tsx";
+import { FindingSummary } from "./finding-screen.tsx";
+import { replaySession } from "../../../../shared/flow/session-log.ts";
+
+const closedWords: Record<SessionDetail["reviewState"], string> = {
+  not_submitted: "This check is closed.",
+  waiting: "Completed: the check now waits for the shop lead's review.",
+  approved: "Completed and approved by the shop lead.",
+  returned: "The shop lead sent this check back.",
+};
+
+function ClosedSession({ detail }: { detail: SessionDetail }) {
+  const compiled = useMemo(() => compileFlow(detail.definition), [detail.definition]);
+  const replayed = useMemo(() => replaySession(compiled, detail.input, detail.events.map((e) => e.event)), [compiled, detail]);
+  const step = replayed.ok ? compiled.steps[replayed.stepId] : undefined;
+  return (
+    <div className="flex flex-col gap-6">
+      <p role="status" className="max-w-[70ch] rounded-lg border-2 border-line-strong bg-raised px-5 py-4 text-lg font-semibold">
+        {detail.status === "abandoned" ? "This check was abandoned." : closedWords[detail.reviewState]}
+      </p>
+      {replayed.ok && step?.kind === "finding" && <FindingSummary compiled={compiled} step={step} context={replayed.context} />}
+      <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
+        Back to the bench
+      </Link>
+    </div>
+  );
+}
+
+function OpenSession({ detail, unitSystem }: { detail: SessionDetail; unitSystem: "imperial" | "metric" }) {
+  // A pinned flow version never changes, so the compiled flow lives as long as the definition.
+  const compiled = useMemo(() => compileFlow(detail.definition), [detail.definition]);
+  return <SessionRunner detail={detail} compiled={compiled} unitSystem={unitSystem} />;
+}
+
+export function SessionPage({ sessionId, unitSystem }: { sessionId: string; unitSystem: "imperial" | "metric" }) {
+  const session = useQuery(sessionQueryOptions(sessionId));
+  if (session.isPending) return <p className="text-lg">Opening the check…</p>;
+  if (session.isError && !session.data) {
+    return (
+      <div role="alert" className="flex max-w-[70ch] flex-col gap-3">
+        <h1 className="text-step font-semibold">The check could not be opened</h1>
+        <p>{session.error.message} Check the connection, then open it again from the bench.</p>
+        <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
+          Back to the bench
+        </Link>
+      </div>
+    );
+  }
+  const detail = session.data;
+  if (detail.status !== "open") return <ClosedSession detail={detail} />;
+  // Keyed by id: a different session starts from its own log.
+  return <OpenSession key={detail.id} detail={detail} unitSystem={unitSystem} />;
+}

@@ -1,0 +1,56 @@
+import { useState } from "react";
+import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
+import { latestReading } from "../../../../shared/flow/context.ts";
+import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
+import { Button } from "../../../components/ui/button.tsx";
+import { useSessionRunner } from "../lib/use-session-runner.ts";
+import { AbandonCheck } from "./abandon-dialog.tsx";
+import { FindingActions } from "./finding-actions.tsx";
+import { FindingSummary } from "./finding-screen.tsx";
+import { PathTrail } from "./path-trail.tsx";
+import { SaveStatus } from "./save-status.tsx";
+import { StepMotion } from "./step-motion.tsx";
+import { StepScreen } from "./step-screen.tsx";
+import { VerdictCard } from "./verdict-card.tsx";
+
+/** The guided check: the machine says where the session stands, and the screen follows at once. */
+export function SessionRunner({ detail, compiled, unitSystem }: { detail: SessionDetail; compiled: CompiledFlow; unitSystem: "imperial" | "metric" }) {
+  const runner = useSessionRunner(detail, compiled);
+  const { step, replayed, lastRequest } = runner;
+  // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
+  const [seenVerdict, setSeenVerdict] = useState<string | null>(null);
+  const recorded = lastRequest?.event.type === "step.record" && lastRequest.id !== seenVerdict ? lastRequest : null;
+  const reading = recorded && recorded.event.type === "step.record" ? latestReading(replayed.context, recorded.event.stepId) : null;
+  const direction = lastRequest?.event.type === "step.back" ? -1 : 1;
+  const screenKey = reading ? `verdict-${recorded?.id}` : `${replayed.context.path.length}-${step.id}`;
+
+  return (
+    <div className="flex flex-col gap-6 pb-10">
+      <div className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 border-b-2 border-line pb-3">
+        <PathTrail compiled={compiled} path={replayed.context.path} />
+        <SaveStatus state={runner.save} />
+      </div>
+      {runner.problem && (
+        <div role="alert" className="flex max-w-[70ch] flex-wrap items-center justify-between gap-3 rounded-lg border-2 border-problem bg-problem-soft px-4 py-3">
+          <p className="text-base font-medium">{runner.problem}</p>
+          <Button onClick={runner.dismissProblem}>Understood</Button>
+        </div>
+      )}
+      <StepMotion key={screenKey} direction={direction}>
+        {reading && recorded ? (
+          <VerdictCard step={compiled.steps[reading.stepId]!} reading={reading} altitudeM={replayed.context.altitudeM} onContinue={() => setSeenVerdict(recorded.id)} />
+        ) : step.kind === "finding" ? (
+          <>
+            <FindingSummary compiled={compiled} step={step} context={replayed.context} />
+            <FindingActions sessionId={detail.id} save={runner.save} />
+          </>
+        ) : (
+          <StepScreen sessionId={detail.id} runner={runner} step={step} unitSystem={unitSystem} />
+        )}
+      </StepMotion>
+      <div className="flex justify-end">
+        <AbandonCheck sessionId={detail.id} />
+      </div>
+    </div>
+  );
+}
