@@ -41,8 +41,6 @@ describe("a work order's screen", () => {
 
     await waitFor(() => expect(router.state.location.pathname).toBe("/bench/sessions/se-9"));
     expect(posted).toEqual({ flowId: "handheld-2-stroke" });
-    expect(await screen.findByRole("heading", { level: 1, name: "Guided check" })).toBeInTheDocument();
-    expect(screen.getByText("Coming in a later release")).toBeInTheDocument();
   });
 
   it("opens the check already open on this unit instead of starting a second one", async () => {
@@ -74,6 +72,17 @@ describe("a work order's screen", () => {
     expect(screen.getByText("Finished")).toBeInTheDocument();
     expect(screen.getByText(/Ines Barrow, started/)).toBeInTheDocument();
     expect(screen.getByText("Finding: Varnished carburettor")).toBeInTheDocument();
+  });
+
+  it("offers only going on with the check already open on this unit", async () => {
+    const sessions = [
+      { id: "se-5", flowTitle: "Handheld 2-stroke no-start", flowVersion: 3, techId: "u-1", techName: "Rosa Lindqvist", status: "open" as const, findingTitle: null, startedAt: "2026-03-02T09:00:00.000Z" },
+    ];
+    stubApi(apprentice, detailAnswers(buildDetail({ state: "diagnosing", sessions })));
+    await openDetail();
+    expect(screen.getByRole("link", { name: "Go on with the check" })).toHaveAttribute("href", "/bench/sessions/se-5");
+    expect(screen.queryByRole("button", { name: "Handheld 2-stroke no-start" })).not.toBeInTheDocument();
+    expect(screen.getByText("Diagnosing")).toBeInTheDocument();
   });
 
   it("shows the plain not-found page for a work order that does not exist", async () => {

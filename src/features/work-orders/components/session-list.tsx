@@ -1,6 +1,4 @@
-import { Link } from "react-router";
 import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
-import { buttonClasses } from "../../../components/ui/button.tsx";
 
 type Session = WorkOrderDetail["sessions"][number];
 
@@ -31,11 +29,6 @@ export function SessionList({ sessions }: { sessions: Session[] }) {
                 {session.techName}, started {startedFormat.format(new Date(session.startedAt))}
               </p>
               <p>{session.findingTitle ? `Finding: ${session.findingTitle}` : "No finding yet."}</p>
-              {session.status === "open" && (
-                <Link to={`/bench/sessions/${encodeURIComponent(session.id)}`} className={`${buttonClasses({ variant: "secondary" })} self-start`}>
-                  Go on with this check
-                </Link>
-              )}
             </li>
           ))}
         </ul>

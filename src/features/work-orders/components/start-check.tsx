@@ -1,6 +1,7 @@
-import { useNavigate } from "react-router";
+import { Link, useNavigate } from "react-router";
 import { equipmentKindLabels } from "../../../../shared/equipment.ts";
 import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
+import { buttonClasses } from "../../../components/ui/button.tsx";
 import { FormProblem } from "../../../components/ui/form-message.tsx";
 import { clientErrorIds, isApiRequestError } from "../../../lib/api-client.ts";
 import { useStartSession } from "../api/start-session.ts";
@@ -10,16 +11,33 @@ export function StartCheck({ workOrder }: { workOrder: WorkOrderDetail }) {
   const navigate = useNavigate();
   const start = useStartSession(workOrder.id);
   const { applicableFlows, unit } = workOrder;
+  const open = workOrder.sessions.find((session) => session.status === "open");
 
   const onStart = async (flowId: string) => {
     if (start.isPending) return;
     try {
       const sessionId = await start.mutateAsync(flowId);
-      await navigate(`/bench/sessions/${encodeURIComponent(sessionId)}`);
+      await navigate(sessionPath(sessionId));
     } catch {
       // The problem is shown from the mutation's error below.
     }
   };
+
+  // One check at a time per unit: while one is open, going on with it is the only action.
+  if (open) {
+    return (
+      <section aria-labelledby="start-check" className="flex flex-col gap-4">
+        <h2 id="start-check" className="text-2xl font-semibold">
+          Check in progress
+        </h2>
+        <p>{open.techName} started {open.flowTitle}. Finish it before starting another check.</p>
+        <Link to={sessionPath(open.id)} className={`${buttonClasses({ variant: "primary", size: "main" })} w-full`}>
+          Go on with the check
+          <StartGlyph />
+        </Link>
+      </section>
+    );
+  }
 
   return (
     <section aria-labelledby="start-check" className="flex flex-col gap-4">
@@ -78,4 +96,8 @@ function StartGlyph() {
       <path d="M9 5l7 7-7 7" fill="none" strokeWidth="3" strokeLinecap="round" strokeLinejoin="round" className="stroke-current" />
     </svg>
   );
+}
+
+function sessionPath(id: string) {
+  return `/bench/sessions/${encodeURIComponent(id)}`;
 }
