@@ -48,7 +48,7 @@ export default tseslint.config(
     },
   })),
   {
-    files: ["scripts/**/*.ts", "tests/**/*.{ts,tsx}"],
+    files: ["server/tools/**/*.ts", "tests/**/*.{ts,tsx}"],
     rules: { "no-console": "off" },
   },
 );

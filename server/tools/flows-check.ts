@@ -2,9 +2,9 @@
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { basename, join, relative } from "node:path";
 import { fileURLToPath } from "node:url";
-import type { Problem } from "../shared/flow/problems.ts";
-import type { SectionDefinition } from "../shared/flow/schema.ts";
-import { validateFlow, validateSection } from "../shared/flow/validate.ts";
+import type { Problem } from "../../shared/flow/problems.ts";
+import type { SectionDefinition } from "../../shared/flow/schema.ts";
+import { validateFlow, validateSection } from "../../shared/flow/validate.ts";
 
 export interface FileProblem extends Problem {
   file: string;
@@ -80,7 +80,7 @@ export function formatReport(report: FolderReport): { lines: string[]; failed: b
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
-  const dir = process.argv[2] ?? fileURLToPath(new URL("../flows/", import.meta.url));
+  const dir = process.argv[2] ?? fileURLToPath(new URL("../../flows/", import.meta.url));
   const { lines, failed } = formatReport(checkFlowsFolder(dir));
   for (const line of lines) console.log(line);
   process.exitCode = failed ? 1 : 0;

@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { checkFlowsFolder, formatReport } from "../../../scripts/flows-check.ts";
+import { checkFlowsFolder, formatReport } from "../../../server/tools/flows-check.ts";
 import { choice, finding, flow, instruction, sectionStep, section } from "./fixtures.ts";
 
 function folder(files: Record<string, unknown>): string {
