@@ -31,6 +31,7 @@ export function isApiRequestError(error: unknown, id?: string): error is ApiRequ
 
 interface ApiFetchOptions<T> {
   method?: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+  /** JSON-encoded, except FormData, which goes as multipart (photos). */
   body?: unknown;
   signal?: AbortSignal;
   /** Checks the success body at the boundary. */
@@ -40,14 +41,15 @@ interface ApiFetchOptions<T> {
 export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptions<T> = {}): Promise<T> {
   const { method = "GET", body, signal, schema } = options;
   const headers: Record<string, string> = { accept: "application/json" };
-  if (body !== undefined) headers["content-type"] = "application/json";
+  const multipart = body instanceof FormData;
+  if (body !== undefined && !multipart) headers["content-type"] = "application/json";
 
   let response: Response;
   try {
     response = await fetch(path, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
       credentials: "same-origin",
       signal,
     });

@@ -1,36 +1,15 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { apiErrorSchema } from "../../../../shared/schemas/common.ts";
-import { ApiRequestError, clientErrorIds } from "../../../lib/api-client.ts";
+import { apiFetch } from "../../../lib/api-client.ts";
 import { workOrderKeys } from "./keys.ts";
 
 const uploadedPhotoSchema = z.object({ id: z.string(), url: z.string(), thumbUrl: z.string() });
 export type UploadedPhoto = z.infer<typeof uploadedPhotoSchema>;
 
-// A multipart body, so the JSON helper does not fit; errors still come back as ApiRequestError.
 export async function uploadIntakePhoto({ workOrderId, photo }: { workOrderId: string; photo: File }): Promise<UploadedPhoto> {
   const body = new FormData();
   body.append("photo", photo);
-  let response: Response;
-  try {
-    response = await fetch(`/api/work-orders/${encodeURIComponent(workOrderId)}/intake-photo`, {
-      method: "POST",
-      body,
-      headers: { accept: "application/json" },
-      credentials: "same-origin",
-    });
-  } catch {
-    throw new ApiRequestError({ status: 0, id: clientErrorIds.offline, message: "The server could not be reached." });
-  }
-  const payload: unknown = await response.json().catch(() => undefined);
-  if (!response.ok) {
-    const parsed = apiErrorSchema.safeParse(payload);
-    const error = parsed.success ? parsed.data.error : { id: clientErrorIds.unexpectedResponse, message: `The server answered ${response.status}.` };
-    throw new ApiRequestError({ status: response.status, ...error });
-  }
-  const parsed = uploadedPhotoSchema.safeParse(payload);
-  if (!parsed.success) throw new ApiRequestError({ status: response.status, id: clientErrorIds.unexpectedResponse, message: "The server's answer was not understood." });
-  return parsed.data;
+  return apiFetch(`/api/work-orders/${encodeURIComponent(workOrderId)}/intake-photo`, { method: "POST", body, schema: uploadedPhotoSchema });
 }
 
 export function useUploadIntakePhoto() {
