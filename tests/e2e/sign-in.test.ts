@@ -38,8 +38,9 @@ for (const [orientation, viewport] of Object.entries(viewports)) {
         await page.getByLabel(/^password$/i).fill(demo.password);
         await page.getByRole("button", { name: /^sign in$/i }).click();
         await page.waitForURL(new RegExp(`${homes[demo.role]}$`));
-        const links = await page.getByRole("navigation", { name: /areas/i }).getByRole("link").allInnerTexts();
-        expect(links.map((l) => l.trim())).toEqual(navigation[demo.role]);
+        // The home's lazy chunk may still be loading when the address changes: wait for the navigation.
+        const links = page.getByRole("navigation", { name: /areas/i }).getByRole("link");
+        await expect.poll(async () => (await links.allInnerTexts()).map((l) => l.trim()), { timeout: 15_000 }).toEqual(navigation[demo.role]);
         await snap(page, `home-${demo.role}-${orientation}`);
         await page.getByRole("button", { name: /sign out/i }).click();
         await page.waitForURL(/\/sign-in/);
