@@ -5,7 +5,7 @@ import type { Readable } from "node:stream";
 import type { AppContext } from "../context.ts";
 import { attachments, type AttachmentRow } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
-import { notFound } from "../lib/errors.ts";
+import { conflict, notFound } from "../lib/errors.ts";
 import { storageFor } from "../storage/storage.ts";
 import { recordAudit } from "./audit.ts";
 import { processImage } from "./images.ts";
@@ -23,15 +23,34 @@ export interface PhotoOwner {
 
 export const photoUrls = (id: string) => ({ url: `/api/attachments/${id}`, thumbUrl: `/api/attachments/${id}/thumb` });
 
-/** Re-encodes and stores the photo, then records it; the image work and the writes happen before, never inside, the transaction. */
-export async function savePhoto(ctx: Ctx, user: PublicUser, owner: PhotoOwner, bytes: Buffer): Promise<UploadedPhoto> {
+const uploaded = (row: AttachmentRow): UploadedPhoto => ({ id: row.id, width: row.width, height: row.height, ...photoUrls(row.id) });
+
+/** The photo already stored under a tablet's id, if it is the same owner's and step's; another's id is a conflict. */
+async function alreadyStored(ctx: Ctx, user: PublicUser, owner: PhotoOwner, id: string): Promise<UploadedPhoto | null> {
+  const [row] = await ctx.db.select().from(attachments).where(eq(attachments.id, id));
+  if (!row) return null;
+  if (row.ownerType !== owner.type || row.ownerId !== owner.id || row.stepId !== owner.stepId || row.createdBy !== user.id) {
+    throw conflict("attachment_id_taken", "Another photo already has this id; send it with a new one.");
+  }
+  return uploaded(row);
+}
+
+/**
+ * Re-encodes and stores the photo, then records it; the image work and the writes happen before, never inside, the transaction.
+ * With a tablet-chosen id the upload is idempotent: the same photo sent again returns the stored one (`created: false`).
+ */
+export async function savePhoto(ctx: Ctx, user: PublicUser, owner: PhotoOwner, bytes: Buffer, clientId?: string): Promise<UploadedPhoto & { created: boolean }> {
+  if (clientId) {
+    const existing = await alreadyStored(ctx, user, owner, clientId);
+    if (existing) return { ...existing, created: false };
+  }
   const image = await processImage(bytes);
   const storage = storageFor(ctx.env);
   const storageKey = `${randomUUID()}.webp`;
   const thumbKey = `${randomUUID()}.webp`;
   await storage.put(storageKey, image.main);
   await storage.put(thumbKey, image.thumb);
-  const id = uuidv7();
+  const id = clientId ?? uuidv7();
   try {
     await ctx.db.transaction(async (tx) => {
       await tx.insert(attachments).values({
@@ -53,9 +72,12 @@ export async function savePhoto(ctx: Ctx, user: PublicUser, owner: PhotoOwner, b
     });
   } catch (e) {
     await Promise.all([storage.delete(storageKey), storage.delete(thumbKey)]);
+    // Two copies of the same upload at once: the one that lost the race answers with the winner's row.
+    const existing = clientId ? await alreadyStored(ctx, user, owner, clientId).catch(() => null) : null;
+    if (existing) return { ...existing, created: false };
     throw e;
   }
-  return { id, width: image.width, height: image.height, ...photoUrls(id) };
+  return { id, width: image.width, height: image.height, ...photoUrls(id), created: true };
 }
 
 /** The attachment's bytes for a user allowed to read its owner record; anyone else is told it does not exist. */

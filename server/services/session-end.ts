@@ -1,14 +1,36 @@
-import { eq } from "drizzle-orm";
+import { and, eq, ne, or } from "drizzle-orm";
 import type { AppContext } from "../context.ts";
-import { diagnosticSessions } from "../db/schema.ts";
+import type { Database } from "../db/client.ts";
+import { diagnosticSessions, workOrders } from "../db/schema.ts";
 import { conflict, unprocessable } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
 import { compiledVersion } from "./flows.ts";
 import { sessionEventsOf, sessionFor } from "./sessions.ts";
+import { moveWorkOrder } from "./work-orders.ts";
 import { replaySession } from "../../shared/flow/session-log.ts";
 import type { PublicUser } from "../../shared/schemas/users.ts";
 
 const closed = () => conflict("session_closed", "This session is already completed or abandoned.");
+
+type Tx = Pick<Database, "select" | "update" | "insert">;
+
+/**
+ * A finished session moves its work order on. With a finding the ticket waits for the customer's
+ * go-ahead (the estimate goes out from there); when the last open session is abandoned without any
+ * finding on the ticket, it goes back to waiting for diagnosis, so it is not left "diagnosing" with
+ * nobody on it. A ticket that has already moved past diagnosing is left where it is.
+ */
+async function moveOnAfterSession(tx: Tx, user: PublicUser, workOrderId: string, sessionId: string, outcome: "completed" | "abandoned") {
+  const [wo] = await tx.select({ state: workOrders.state }).from(workOrders).where(eq(workOrders.id, workOrderId)).for("update");
+  if (wo?.state !== "diagnosing") return;
+  if (outcome === "completed") return moveWorkOrder(tx, workOrderId, wo.state, "waiting_for_approval", user.id);
+  const others = await tx
+    .select({ id: diagnosticSessions.id })
+    .from(diagnosticSessions)
+    .where(and(eq(diagnosticSessions.workOrderId, workOrderId), ne(diagnosticSessions.id, sessionId), or(eq(diagnosticSessions.status, "open"), eq(diagnosticSessions.status, "completed"))))
+    .limit(1);
+  if (others.length === 0) await moveWorkOrder(tx, workOrderId, wo.state, "waiting_for_diagnosis", user.id);
+}
 
 /** Completes the session when its replay stands at a finding, and sends it for review. */
 export async function completeSession(ctx: Pick<AppContext, "db">, user: PublicUser, id: string): Promise<void> {
@@ -24,6 +46,7 @@ export async function completeSession(ctx: Pick<AppContext, "db">, user: PublicU
       .update(diagnosticSessions)
       .set({ status: "completed", reviewState: "waiting", completedAt: new Date(), currentStepId: result.stepId, findingStepId: result.findingStepId })
       .where(eq(diagnosticSessions.id, id));
+    await moveOnAfterSession(tx, user, session.workOrderId, id, "completed");
     await recordAudit(tx, { userId: user.id, action: "session.completed", recordType: "diagnostic_session", recordId: id, details: { findingStepId: result.findingStepId } });
   });
 }
@@ -34,6 +57,7 @@ export async function abandonSession(ctx: Pick<AppContext, "db">, user: PublicUs
     const session = await sessionFor(tx, user, id, "session.abandon", true);
     if (session.status !== "open") throw closed();
     await tx.update(diagnosticSessions).set({ status: "abandoned", abandonReason: reason }).where(eq(diagnosticSessions.id, id));
+    await moveOnAfterSession(tx, user, session.workOrderId, id, "abandoned");
     await recordAudit(tx, { userId: user.id, action: "session.abandoned", recordType: "diagnostic_session", recordId: id, details: { reason } });
   });
 }

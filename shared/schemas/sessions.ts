@@ -61,7 +61,11 @@ export const appendEventResponseSchema = z.object({
 });
 
 /** The multipart `stepId` field of POST /api/sessions/:id/photos. */
-export const sessionPhotoFieldsSchema = z.object({ stepId: z.string().min(1, { error: "Name the step the photo is for." }).max(800) });
+export const sessionPhotoFieldsSchema = z.object({
+  stepId: z.string().min(1, { error: "Name the step the photo is for." }).max(800),
+  /** Chosen by the tablet, so a photo sent again after a lost answer is stored once. */
+  id: z.uuid({ error: "The photo's id must be a UUID." }).optional(),
+});
 
 /** What an upload answers; the tablet then appends a photo.attach event naming the id. */
 export const uploadedPhotoSchema = z.object({ id: z.string(), width: z.number().int(), height: z.number().int(), url: z.string(), thumbUrl: z.string() });

@@ -49,10 +49,11 @@ export function sessionsRouter(ctx: AppContext): Router {
     next();
   };
   router.post("/:id/photos", requireUser, validate({ params: idParamsSchema }), photoTarget, photoUpload, validate({ body: sessionPhotoFieldsSchema }), async (req: Request, res: Response) => {
-    const { stepId } = req.body as z.output<typeof sessionPhotoFieldsSchema>;
+    const { stepId, id } = req.body as z.output<typeof sessionPhotoFieldsSchema>;
     const flow = await compiledVersion(ctx.db, res.locals.flowVersionId as string);
     if (!flow.steps[stepId]) throw unprocessable("unknown_step", `"${stepId}" is not a step of this session's flow.`, { stepId });
-    res.status(201).json(await savePhoto(ctx, currentUser(res), { type: "session", id: idOf(res), stepId }, req.file!.buffer));
+    const { created, ...photo } = await savePhoto(ctx, currentUser(res), { type: "session", id: idOf(res), stepId }, req.file!.buffer, id);
+    res.status(created ? 201 : 200).json(photo);
   });
 
   return router;

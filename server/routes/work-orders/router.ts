@@ -51,7 +51,8 @@ export function workOrdersRouter(ctx: AppContext): Router {
   };
   router.post("/:id/intake-photo", requireUser, validate({ params: idParamsSchema }), intakePhotoTarget, photoUpload, async (req: Request, res: Response) => {
     const owner = { type: "work_order" as const, id: (res.locals.params as Id).id, stepId: null };
-    res.status(201).json(await savePhoto(ctx, currentUser(res), owner, req.file!.buffer));
+    const { created: _created, ...photo } = await savePhoto(ctx, currentUser(res), owner, req.file!.buffer);
+    res.status(201).json(photo);
   });
 
   return router;

@@ -86,6 +86,25 @@ describe("POST /api/sessions/:id/photos", () => {
     expect(res.body.error.id).toBe("unknown_step");
   });
 
+  it("stores a photo sent twice under the tablet's id once, and refuses that id on another step", async () => {
+    const session = await buildSession(t.ctx.db, { techId: tech.user.id });
+    const png = await makeImage("png");
+    const id = "0192f3a1-7c00-7000-8000-00000000a001";
+    const send = (stepId: string) => tech.agent.post(`/api/sessions/${session.id}/photos`).field("stepId", stepId).field("id", id).attach("photo", png, { filename: "a.png", contentType: "image/png" });
+    const first = await send("prepare/as-received");
+    expect(first.status).toBe(201);
+    expect(first.body.id).toBe(id);
+    const again = await send("prepare/as-received");
+    expect(again.status).toBe(200);
+    expect(again.body).toEqual(first.body);
+    expect(await t.ctx.db.select().from(attachments).where(eq(attachments.id, id))).toHaveLength(1);
+    const elsewhere = await send("prepare/protect");
+    expect(elsewhere.status).toBe(409);
+    expect(elsewhere.body.error.id).toBe("attachment_id_taken");
+    const badId = await tech.agent.post(`/api/sessions/${session.id}/photos`).field("stepId", "prepare/as-received").field("id", "not-a-uuid").attach("photo", png, { filename: "a.png", contentType: "image/png" });
+    expect(badId.status).toBe(400);
+  });
+
   it("hides another tech's session photos from an apprentice", async () => {
     const session = await buildSession(t.ctx.db, { techId: tech.user.id });
     const png = await makeImage("png");
