@@ -28,6 +28,8 @@ export default mergeConfig(
             environment: "jsdom",
             include: ["tests/components/**/*.test.tsx"],
             setupFiles: ["tests/components/setup.ts"],
+            // Typing a whole intake form key by key takes seconds when the machine is busy.
+            testTimeout: 15_000,
           },
         },
         {

@@ -1,6 +1,6 @@
 // replaySession: a session's whole log — the flow's own events through the machine, and the tablet's
 // notes, photos and caution acknowledgements checked against the step the session stands at.
-import { createActor } from "xstate";
+import { createActor, type Snapshot } from "xstate";
 import { sessionEventBodySchema, type SessionEventBody } from "../schemas/sessions.ts";
 import type { CompiledFlow, CompiledStep } from "./compile.ts";
 import { currentStepId, type FlowContext } from "./context.ts";
@@ -30,7 +30,15 @@ export interface SessionAnnotations {
 }
 
 export type SessionReplay =
-  | ({ ok: true; stepId: string; status: "in_progress" | "finding"; findingStepId: string | null; context: FlowContext } & SessionAnnotations)
+  | ({
+      ok: true;
+      stepId: string;
+      status: "in_progress" | "finding";
+      findingStepId: string | null;
+      context: FlowContext;
+      /** The machine's persisted snapshot: a live actor starts from it with createActor(machine, { snapshot }). */
+      snapshot: Snapshot<unknown>;
+    } & SessionAnnotations)
   | { ok: false; index: number; event: unknown; code: SessionRefusalCode; reason: string; stepId: string | null };
 
 /** The DANGER and WARNING signals of a step not yet acknowledged, most severe first. */
@@ -95,7 +103,15 @@ export function replaySession(compiled: CompiledFlow, input: FlowInput, events: 
     }
     const stepId = currentStepId(snapshot.context);
     const finished = snapshot.status === "done";
-    return { ok: true, stepId, status: finished ? "finding" : "in_progress", findingStepId: finished ? stepId : null, context: snapshot.context, ...annotations };
+    return {
+      ok: true,
+      stepId,
+      status: finished ? "finding" : "in_progress",
+      findingStepId: finished ? stepId : null,
+      context: snapshot.context,
+      snapshot: actor.getPersistedSnapshot(),
+      ...annotations,
+    };
   } finally {
     actor.stop();
   }

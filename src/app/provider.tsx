@@ -3,7 +3,8 @@ import { MutationCache, QueryCache, QueryClient, QueryClientProvider } from "@ta
 import { PersistQueryClientProvider, type Persister } from "@tanstack/react-query-persist-client";
 import { meQueryOptions } from "../features/auth/api/get-me.ts";
 import { signOut } from "../features/auth/api/sign-out.ts";
-import { registerSessionEventDefaults } from "../features/session/api/append-event.ts";
+import { registerSessionSaveDefaults } from "../features/session/api/append-event.ts";
+import { forgetKeptPhotos } from "../features/session/api/upload-photo.ts";
 import { isApiRequestError } from "../lib/api-client.ts";
 import { MotionProvider } from "../lib/motion.tsx";
 import { PERSIST_MAX_AGE_MS, persistDehydrateOptions, resumeRestoredSaves } from "./query-persistence.ts";
@@ -26,7 +27,7 @@ export function createQueryClient() {
     },
   });
   // Before any restore: saves taken back from storage need their function.
-  registerSessionEventDefaults(queryClient);
+  registerSessionSaveDefaults(queryClient);
   return queryClient;
 }
 
@@ -40,7 +41,10 @@ function useForgetOnSignOut(queryClient: QueryClient, persister: Persister | und
   useEffect(() => {
     if (!persister) return;
     return queryClient.getMutationCache().subscribe((event) => {
-      if (event.type === "updated" && event.action.type === "success" && event.mutation.options.mutationFn === signOut) void persister.removeClient();
+      if (event.type === "updated" && event.action.type === "success" && event.mutation.options.mutationFn === signOut) {
+        void persister.removeClient();
+        void forgetKeptPhotos();
+      }
     });
   }, [queryClient, persister]);
 }

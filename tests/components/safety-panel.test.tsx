@@ -39,10 +39,17 @@ describe("SafetyPanel", () => {
     expect(within(panel).getByRole("img", { name: "Safety alert symbol" })).toBeInTheDocument();
     expect(onAcknowledge).not.toHaveBeenCalled();
 
-    await userEvent.setup().click(within(panel).getByRole("button", { name: "Read and understood" }));
+    const user = userEvent.setup();
+    await user.click(within(panel).getByRole("button", { name: "Read and understood" }));
     expect(onAcknowledge).toHaveBeenCalledTimes(1);
-    expect(within(panel).queryByRole("button")).not.toBeInTheDocument();
+    expect(within(panel).queryByRole("button", { name: "Read and understood" })).not.toBeInTheDocument();
     expect(within(panel).getByRole("status")).toHaveTextContent("You have read this and will work with care.");
+    // Read once, the text folds under its band and can be opened again.
+    expect(screen.queryByText("Exhaust carbon monoxide can kill in minutes.")).not.toBeVisible();
+    await user.click(within(panel).getByRole("button", { name: "Show the text" }));
+    expect(screen.getByText("Exhaust carbon monoxide can kill in minutes.")).toBeVisible();
+    expect(within(panel).getByRole("button", { name: "Fold the text away" })).toHaveAttribute("aria-expanded", "true");
+    expect(onAcknowledge).toHaveBeenCalledTimes(1);
   });
 
   it("shows an earlier acknowledgement as done", () => {

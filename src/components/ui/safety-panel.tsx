@@ -15,11 +15,21 @@ const bands: Record<SignalWord, { word: string; band: string; mark: string }> = 
   notice: { word: "NOTICE", band: "bg-safety-blue text-safety-light italic", mark: "" },
 };
 
-/** ANSI Z535.4 style message: signal-word band, then what to do; DANGER and WARNING must be acknowledged. */
+/**
+ * ANSI Z535.4 style message: signal-word band, then what to do; DANGER and WARNING must be acknowledged.
+ * Once acknowledged the text folds away under its band (it can be opened again), so the step's own
+ * action is not pushed off the screen by panels the tech has already read.
+ */
 export function SafetyPanel(props: SafetyPanelProps) {
   const { signal, title, children } = props;
   const wordId = useId();
+  const textId = useId();
   const { word, band, mark } = bands[signal];
+  const needsAck = props.signal === "danger" || props.signal === "warning";
+  const [pressed, setPressed] = useState(false);
+  const [reopened, setReopened] = useState(false);
+  const done = needsAck && (pressed || props.acknowledged === true);
+  const folded = done && !reopened;
 
   return (
     <section aria-labelledby={wordId} className="overflow-hidden rounded-md border-2 border-ink bg-raised">
@@ -29,42 +39,40 @@ export function SafetyPanel(props: SafetyPanelProps) {
           {word}
         </span>
       </div>
-      <div className="flex max-w-[70ch] flex-col gap-3 px-5 py-4">
-        {title && <p className="text-xl font-semibold">{title}</p>}
-        <div className="text-base">{children}</div>
-        {(props.signal === "danger" || props.signal === "warning") && (
-          <Acknowledgement onAcknowledge={props.onAcknowledge} acknowledged={props.acknowledged} />
+      <div className="flex max-w-[70ch] flex-col gap-3 px-5 py-3">
+        <div id={textId} hidden={folded} className="flex flex-col gap-3 pt-1">
+          {title && <p className="text-xl font-semibold">{title}</p>}
+          <div className="text-base">{children}</div>
+        </div>
+        {needsAck && !done && (
+          <Button
+            variant="primary"
+            size="main"
+            className="self-start"
+            onClick={() => {
+              setPressed(true);
+              props.onAcknowledge();
+            }}
+          >
+            Read and understood
+          </Button>
+        )}
+        {done && (
+          <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-2">
+            <p role="status" className="flex items-center gap-3 font-semibold">
+              <svg viewBox="0 0 24 24" className="size-7 shrink-0" aria-hidden="true" focusable="false">
+                <circle cx="12" cy="12" r="11" className="fill-accent" />
+                <path d="M7 12.5l3.2 3.2L17 9" fill="none" strokeWidth="2.6" className="stroke-accent-ink" />
+              </svg>
+              You have read this and will work with care.
+            </p>
+            <Button aria-expanded={!folded} aria-controls={textId} onClick={() => setReopened(!reopened)}>
+              {folded ? "Show the text" : "Fold the text away"}
+            </Button>
+          </div>
         )}
       </div>
     </section>
-  );
-}
-
-function Acknowledgement({ onAcknowledge, acknowledged = false }: { onAcknowledge: () => void; acknowledged?: boolean }) {
-  const [done, setDone] = useState(acknowledged);
-  if (done || acknowledged) {
-    return (
-      <p role="status" className="flex min-h-16 items-center gap-3 font-semibold">
-        <svg viewBox="0 0 24 24" className="size-7 shrink-0" aria-hidden="true" focusable="false">
-          <circle cx="12" cy="12" r="11" className="fill-accent" />
-          <path d="M7 12.5l3.2 3.2L17 9" fill="none" strokeWidth="2.6" className="stroke-accent-ink" />
-        </svg>
-        You have read this and will work with care.
-      </p>
-    );
-  }
-  return (
-    <Button
-      variant="primary"
-      size="main"
-      className="self-start"
-      onClick={() => {
-        setDone(true);
-        onAcknowledge();
-      }}
-    >
-      Read and understood
-    </Button>
   );
 }
 

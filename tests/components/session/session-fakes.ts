@@ -58,9 +58,10 @@ export function buildSession(events: StoredEvent[] = []): SessionDetail {
 }
 
 type EventAnswer = (request: AppendEventRequest) => Promise<Response>;
+type PhotoAnswer = (form: FormData) => Promise<Response>;
 
-/** A fake server for one session: GET answers the detail, POST /events goes to `onEvent`. */
-export function stubSessionApi(detail: SessionDetail, onEvent: EventAnswer) {
+/** A fake server for one session: GET answers the detail, POST /events goes to `onEvent`, POST /photos to `onPhoto`. */
+export function stubSessionApi(detail: SessionDetail, onEvent: EventAnswer, onPhoto?: PhotoAnswer) {
   const posted: AppendEventRequest[] = [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const url = typeof input === "string" ? input : input instanceof URL ? input.pathname : input.url;
@@ -72,6 +73,7 @@ export function stubSessionApi(detail: SessionDetail, onEvent: EventAnswer) {
       posted.push(request);
       return onEvent(request);
     }
+    if (url === "/api/sessions/se-1/photos" && method === "POST" && onPhoto) return onPhoto(init?.body as FormData);
     throw new Error(`No fake answer for ${method} ${url}`);
   });
   vi.stubGlobal("fetch", fetchMock);

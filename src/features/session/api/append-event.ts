@@ -1,10 +1,12 @@
 import type { Mutation, MutationOptions, QueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
 import { appendEventResponseSchema, type SessionDetail } from "../../../../shared/schemas/sessions.ts";
-import { apiFetch, clientErrorIds, isApiRequestError } from "../../../lib/api-client.ts";
+import { apiFetch, isApiRequestError } from "../../../lib/api-client.ts";
 import type { EventVariables } from "../lib/event-log.ts";
 import { sessionKeys, sessionQueryOptions } from "./get-session.ts";
 import { logFor } from "../lib/session-log-store.ts";
+import { isUnreachable, retryDelay } from "./save-rules.ts";
+import { registerSessionPhotoDefaults } from "./upload-photo.ts";
 
 export const sessionEventKey = ["session-event"] as const;
 export const sessionScope = (sessionId: string) => ({ id: `session-${sessionId}` });
@@ -13,18 +15,12 @@ export function postSessionEvent({ sessionId, request }: EventVariables) {
   return apiFetch(`/api/sessions/${encodeURIComponent(sessionId)}/events`, { method: "POST", body: request, schema: appendEventResponseSchema });
 }
 
-/** No answer at all, or a gateway with no server behind it: the save waits and tries again. */
-export function isUnreachable(error: unknown): boolean {
-  if (error instanceof TypeError) return true;
-  return isApiRequestError(error) && (error.id === clientErrorIds.offline || error.id === clientErrorIds.unreachable || error.status >= 500);
-}
-
-const retryDelay = (attempt: number) => Math.min(1000 * 2 ** attempt, 15_000);
 
 /** The server's word on a refused save, in a sentence for the bench. */
 function refusalWords(error: unknown): string {
   if (isApiRequestError(error, "seq_mismatch")) return "This check changed on another screen; it now shows where the saved session stands.";
   if (isApiRequestError(error, "session_closed")) return "This check is already closed; nothing more can be saved to it.";
+  if (isApiRequestError(error, "unknown_attachment")) return "A photo did not reach the server (it may not be a picture the server can read), so the step needs it again.";
   if (isApiRequestError(error)) return `The server did not keep the last answer: ${error.message}`;
   return "The last answer could not be saved; the check now shows where the saved session stands.";
 }
@@ -67,6 +63,7 @@ export function sessionEventOptions(queryClient: QueryClient) {
 }
 
 /** Registered at start-up, so saves restored from the tablet's storage still know how to run. */
-export function registerSessionEventDefaults(queryClient: QueryClient) {
+export function registerSessionSaveDefaults(queryClient: QueryClient) {
   queryClient.setMutationDefaults(sessionEventKey, sessionEventOptions(queryClient));
+  registerSessionPhotoDefaults(queryClient);
 }

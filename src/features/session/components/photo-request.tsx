@@ -1,44 +1,41 @@
 import { useId, useState } from "react";
-import { useMutation } from "@tanstack/react-query";
 import type { PhotoRequest as PhotoAsk } from "../../../../shared/flow/schema.ts";
+import type { PhotoRecord } from "../../../../shared/flow/session-log.ts";
 import { FieldError } from "../../../components/ui/field-error.tsx";
 import { buttonClasses } from "../../../components/ui/button.tsx";
-import { isApiRequestError } from "../../../lib/api-client.ts";
-import { uploadSessionPhoto } from "../api/upload-photo.ts";
+import { PhotoThumb } from "./photo-thumb.tsx";
 
 interface PhotoRequestProps {
-  sessionId: string;
-  stepId: string;
   ask: PhotoAsk;
-  taken: number;
-  onUploaded: (attachmentId: string) => string | null;
+  taken: readonly PhotoRecord[];
+  /** Keeps and queues the picture; answers why it was refused, or null. */
+  onTake: (photo: File) => Promise<string | null>;
 }
 
-function problemWords(error: unknown): string {
-  if (isApiRequestError(error, "offline") || isApiRequestError(error, "unreachable")) return "No connection: the photo was not sent. Take it again when the connection is back.";
-  if (isApiRequestError(error)) return error.message;
-  return "The photo could not be sent. Try again.";
-}
-
-/** Take a photo with the tablet's camera; it is sent at once and then named in the session. */
-export function PhotoRequest({ sessionId, stepId, ask, taken, onUploaded }: PhotoRequestProps) {
+/** Take a photo with the tablet's camera; it is kept on the tablet and sent in the session's save line. */
+export function PhotoRequest({ ask, taken, onTake }: PhotoRequestProps) {
   const inputId = useId();
+  const [busy, setBusy] = useState(false);
   const [refusal, setRefusal] = useState<string | null>(null);
-  const upload = useMutation({
-    mutationFn: (photo: File) => uploadSessionPhoto({ sessionId, stepId, photo }),
-    onSuccess: (photo) => setRefusal(onUploaded(photo.id)),
-  });
-  const error = refusal ?? (upload.isError ? problemWords(upload.error) : null);
   const required = ask.requirement === "required";
+  // Until a needed photo is in, taking it is the step's main action.
+  const main = required && taken.length === 0;
   return (
     <section aria-label="Photo" className="flex max-w-[70ch] flex-col gap-3 rounded-lg border-2 border-line-strong bg-raised px-5 py-4">
       <p className="text-lg font-semibold">
         {ask.prompt}
         <span className="ml-2 text-base font-normal text-ink-muted">{required ? "(needed before you go on)" : "(if you can)"}</span>
       </p>
-      {taken > 0 && <p className="text-base">✓ {taken === 1 ? "1 photo kept" : `${taken} photos kept`} for this step.</p>}
-      <label htmlFor={inputId} className={`${buttonClasses({ variant: "secondary" })} self-start ${upload.isPending ? "opacity-70" : ""}`}>
-        {upload.isPending ? "Sending the photo…" : taken > 0 ? "Take another photo" : "Take the photo"}
+      {taken.length > 0 && (
+        <div className="flex flex-wrap items-center gap-3">
+          {taken.map((p) => (
+            <PhotoThumb key={p.attachmentId} attachmentId={p.attachmentId} />
+          ))}
+          <p className="text-base">✓ {taken.length === 1 ? "1 photo kept" : `${taken.length} photos kept`} for this step.</p>
+        </div>
+      )}
+      <label htmlFor={inputId} className={`${buttonClasses({ variant: main ? "primary" : "secondary", size: main ? "main" : "regular" })} self-start ${busy ? "opacity-70" : ""}`}>
+        {busy ? "Keeping the photo…" : taken.length > 0 ? "Take another photo" : "Take the photo"}
       </label>
       <input
         id={inputId}
@@ -46,14 +43,20 @@ export function PhotoRequest({ sessionId, stepId, ask, taken, onUploaded }: Phot
         accept="image/*"
         capture="environment"
         className="sr-only"
-        disabled={upload.isPending}
+        disabled={busy}
+        aria-describedby={refusal ? `${inputId}-error` : undefined}
         onChange={(e) => {
           const file = e.target.files?.[0];
           e.target.value = "";
-          if (file) upload.mutate(file);
+          if (!file) return;
+          setBusy(true);
+          void onTake(file).then((why) => {
+            setRefusal(why);
+            setBusy(false);
+          });
         }}
       />
-      {error && <FieldError id={`${inputId}-error`} message={error} />}
+      {refusal && <FieldError id={`${inputId}-error`} message={refusal} />}
     </section>
   );
 }

@@ -3,6 +3,7 @@ import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
 import { latestReading } from "../../../../shared/flow/context.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { Button } from "../../../components/ui/button.tsx";
+import { useSessionLog, type SessionLog } from "../lib/use-session-log.ts";
 import { useSessionRunner } from "../lib/use-session-runner.ts";
 import { AbandonCheck } from "./abandon-dialog.tsx";
 import { FindingActions } from "./finding-actions.tsx";
@@ -13,9 +14,21 @@ import { StepMotion } from "./step-motion.tsx";
 import { StepScreen } from "./step-screen.tsx";
 import { VerdictCard } from "./verdict-card.tsx";
 
-/** The guided check: the machine says where the session stands, and the screen follows at once. */
-export function SessionRunner({ detail, compiled, unitSystem }: { detail: SessionDetail; compiled: CompiledFlow; unitSystem: "imperial" | "metric" }) {
-  const runner = useSessionRunner(detail, compiled);
+interface RunnerProps {
+  detail: SessionDetail;
+  compiled: CompiledFlow;
+  unitSystem: "imperial" | "metric";
+}
+
+/** The guided check: the tablet's log of it, and a live screen remade whenever that log is put back on the server's. */
+export function SessionRunner(props: RunnerProps) {
+  const session = useSessionLog(props.detail);
+  return <LiveSession key={session.log.generation} session={session} {...props} />;
+}
+
+/** The machine says where the session stands, and the screen follows at once. */
+function LiveSession({ detail, compiled, unitSystem, session }: RunnerProps & { session: SessionLog }) {
+  const runner = useSessionRunner(detail, compiled, session);
   const { step, replayed, lastRequest } = runner;
   // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
   const [seenVerdict, setSeenVerdict] = useState<string | null>(null);
@@ -45,7 +58,7 @@ export function SessionRunner({ detail, compiled, unitSystem }: { detail: Sessio
             <FindingActions sessionId={detail.id} save={runner.save} />
           </>
         ) : (
-          <StepScreen sessionId={detail.id} runner={runner} step={step} unitSystem={unitSystem} />
+          <StepScreen runner={runner} step={step} unitSystem={unitSystem} />
         )}
       </StepMotion>
       <div className="flex justify-end">

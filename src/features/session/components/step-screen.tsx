@@ -18,7 +18,7 @@ function gateReasons(runner: SessionRunner, step: RunStep): string[] {
 }
 
 /** One step: what to do, what to watch out for, then the one way on. */
-export function StepScreen({ sessionId, runner, step, unitSystem }: { sessionId: string; runner: SessionRunner; step: RunStep; unitSystem: "imperial" | "metric" }) {
+export function StepScreen({ runner, step, unitSystem }: { runner: SessionRunner; step: RunStep; unitSystem: "imperial" | "metric" }) {
   const reasons = gateReasons(runner, step);
   const blocked = reasons.length > 0;
   const notes = (runner.replayed.notes[step.id] ?? []).map((n) => n.text);
@@ -32,14 +32,7 @@ export function StepScreen({ sessionId, runner, step, unitSystem }: { sessionId:
       <StepCautions step={step} acknowledged={runner.replayed.acknowledgements[step.id] ?? []} onAcknowledge={(signal) => runner.send({ type: "caution.acknowledge", stepId: step.id, signal })} />
       {step.misleads && <MisleadsNote text={step.misleads} />}
       {step.photo && (
-        <PhotoRequest
-          key={step.id}
-          sessionId={sessionId}
-          stepId={step.id}
-          ask={step.photo}
-          taken={runner.photos.length}
-          onUploaded={(attachmentId) => runner.send({ type: "photo.attach", stepId: step.id, attachmentId })}
-        />
+        <PhotoRequest key={step.id} ask={step.photo} taken={runner.photos} onTake={(photo) => runner.takePhoto(step.id, photo)} />
       )}
       <GateNote reasons={reasons} />
       {step.kind === "reading" ? (

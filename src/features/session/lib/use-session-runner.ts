@@ -1,73 +1,92 @@
-// Runs a session on the tablet: the shared machine and replaySession decide, the log saves in order.
-import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
-import { onlineManager, useMutation, useMutationState, useQueryClient } from "@tanstack/react-query";
+// Runs a session on the tablet: a live actor of the shared flow machine says where the session
+// stands and what it takes; replaySession checks notes, photos and cautions; the log saves in order.
+import { useMemo, useState } from "react";
+import { useActorRef, useSelector } from "@xstate/react";
 import { v7 as uuidv7 } from "uuid";
 import type { CompiledFlow, CompiledStep } from "../../../../shared/flow/compile.ts";
+import { currentStepId } from "../../../../shared/flow/context.ts";
 import { machineFor } from "../../../../shared/flow/replay.ts";
 import { replaySession, unacknowledged } from "../../../../shared/flow/session-log.ts";
 import type { FlowEvent } from "../../../../shared/flow/schema.ts";
 import type { SessionDetail, SessionEventBody } from "../../../../shared/schemas/sessions.ts";
-import { pendingRequests, sessionEventKey, sessionEventOptions, sessionScope } from "../api/append-event.ts";
-import { mergeLog, type EventVariables } from "./event-log.ts";
-import { registerLog, SessionLogStore } from "./session-log-store.ts";
+import { keepPhoto, photoFileProblem } from "../api/upload-photo.ts";
+import type { SessionLog } from "./use-session-log.ts";
 
-export type SaveState = { kind: "saved" } | { kind: "saving"; count: number } | { kind: "waiting"; count: number };
+export type { SaveState } from "./use-session-log.ts";
 
-function useSaveState(sessionId: string): SaveState {
-  const online = useSyncExternalStore(onlineManager.subscribe.bind(onlineManager), () => onlineManager.isOnline(), () => true);
-  const pending = useMutationState({
-    filters: { mutationKey: sessionEventKey, status: "pending", predicate: (m) => (m.state.variables as EventVariables | undefined)?.sessionId === sessionId },
-    select: (m) => m.state.failureCount,
-  });
-  if (pending.length === 0) return { kind: "saved" };
-  const failing = !online || pending.some((failures) => failures > 0);
-  return { kind: failing ? "waiting" : "saving", count: pending.length };
+const flowEventTypes = new Set<SessionEventBody["type"]>(["step.answer", "step.record", "step.back", "session.restart"]);
+const isFlowEvent = (event: SessionEventBody): event is FlowEvent & SessionEventBody => flowEventTypes.has(event.type);
+
+function replayOrThrow(compiled: CompiledFlow, detail: SessionDetail, events: readonly SessionEventBody[]) {
+  const replayed = replaySession(compiled, detail.input, events);
+  if (!replayed.ok) throw new Error(`The saved session does not replay: ${replayed.reason}`);
+  return replayed;
 }
 
-export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow) {
-  const queryClient = useQueryClient();
-  const [store] = useState(() => new SessionLogStore(detail.id, mergeLog(detail.events, pendingRequests(queryClient, detail.id))));
-  useEffect(() => registerLog(store), [store]);
-  const log = useSyncExternalStore(store.subscribe, store.getSnapshot, store.getSnapshot);
-  const { mutate } = useMutation({ ...sessionEventOptions(queryClient), scope: sessionScope(detail.id) });
-  const save = useSaveState(detail.id);
-
+/**
+ * The screen's runner. Mount it under a key of `log.generation`: when the log is put back on the
+ * server's, the actor starts again from the replayed log.
+ */
+export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow, session: SessionLog) {
+  const { store, log, save, saveEvent, savePhoto } = session;
   const events = useMemo(() => log.requests.map((r) => r.event), [log.requests]);
-  const replayed = useMemo(() => replaySession(compiled, detail.input, events), [compiled, detail.input, events]);
-  if (!replayed.ok) throw new Error(`The saved session does not replay: ${replayed.reason}`);
-  const step: CompiledStep = compiled.steps[replayed.stepId]!;
-  const machine = machineFor(compiled);
-  const snapshot = useMemo(() => machine.resolveState({ value: step.kind, context: replayed.context }), [machine, step.kind, replayed.context]);
+  const replayed = useMemo(() => replayOrThrow(compiled, detail, events), [compiled, detail, events]);
 
-  /** Whether the machine takes this flow event now; annotations are checked by replaySession on send. */
+  // The actor starts where the log stands when the screen mounts, then takes each flow event as it is given.
+  const [start] = useState(() => replayed.snapshot);
+  const actor = useActorRef(machineFor(compiled), { input: detail.input, snapshot: start });
+  const snapshot = useSelector(actor, (s) => s);
+  const step: CompiledStep = compiled.steps[currentStepId(snapshot.context)]!;
+
+  /** Whether the machine takes this flow event now; the annotation gates are checked on send. */
   const can = (event: FlowEvent) => snapshot.can(event);
   const missingAcks = unacknowledged(step, replayed.acknowledgements[step.id]);
   const photos = replayed.photos[step.id] ?? [];
   const photoMissing = step.photo?.requirement === "required" && photos.length === 0;
 
+  /** Why the shared rules refuse the event after the log, or null when they take it. */
+  const refusal = (event: SessionEventBody): string | null => {
+    const check = replaySession(compiled, detail.input, [...store.getSnapshot().requests.map((r) => r.event), event]);
+    return check.ok ? null : check.reason;
+  };
+
   /** Applies the event at once if the shared rules take it, then saves it; answers the refusal otherwise. */
   const send = (event: SessionEventBody): string | null => {
-    const current = store.getSnapshot().requests;
-    const check = replaySession(compiled, detail.input, [...current.map((r) => r.event), event]);
-    if (!check.ok) return check.reason;
+    const refused = refusal(event);
+    if (refused) return refused;
     const request = store.append(event, uuidv7(), new Date());
-    mutate({ sessionId: detail.id, request });
+    saveEvent({ sessionId: detail.id, request });
+    if (isFlowEvent(event)) actor.send(event);
     return null;
   };
 
-  const lastRequest = log.requests.at(-1);
+  /** Keeps the picture on the tablet, queues it, and names it in the session at once: the tech goes on while it is sent. */
+  const takePhoto = async (stepId: string, file: File): Promise<string | null> => {
+    const attachmentId = uuidv7();
+    const event: SessionEventBody = { type: "photo.attach", stepId, attachmentId };
+    const problem = photoFileProblem(file) ?? refusal(event);
+    if (problem) return problem;
+    try {
+      await keepPhoto(attachmentId, file);
+    } catch {
+      return "The tablet could not keep the photo (its storage may be full). Free some space and take it again.";
+    }
+    savePhoto({ sessionId: detail.id, stepId, attachmentId });
+    return send(event);
+  };
+
   return {
     step,
     replayed,
     snapshot,
     can,
     send,
+    takePhoto,
     save,
     missingAcks,
     photos,
     photoMissing,
-    lastRequest,
-    generation: log.generation,
+    lastRequest: log.requests.at(-1),
     problem: log.problem,
     dismissProblem: () => store.dismissProblem(),
   };

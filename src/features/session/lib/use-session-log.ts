@@ -1,0 +1,38 @@
+// The session's log on this tablet and its save line: answers and photos go to the server one after
+// another, in the order they were given, whether the connection is there or comes back later.
+import { useEffect, useState, useSyncExternalStore } from "react";
+import { onlineManager, useMutation, useMutationState, useQueryClient, type Mutation } from "@tanstack/react-query";
+import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
+import { pendingRequests, sessionEventKey, sessionEventOptions, sessionScope } from "../api/append-event.ts";
+import { sessionPhotoKey, sessionPhotoOptions } from "../api/upload-photo.ts";
+import { mergeLog } from "./event-log.ts";
+import { registerLog, SessionLogStore } from "./session-log-store.ts";
+
+export type SaveState = { kind: "saved" } | { kind: "saving"; count: number } | { kind: "waiting"; count: number };
+
+const saveKeys = new Set<unknown>([sessionEventKey[0], sessionPhotoKey[0]]);
+const isSaveOf = (sessionId: string) => (m: Mutation<unknown, Error, unknown>) =>
+  saveKeys.has(m.options.mutationKey?.[0]) && (m.state.variables as { sessionId?: string } | undefined)?.sessionId === sessionId;
+
+function useSaveState(sessionId: string): SaveState {
+  const online = useSyncExternalStore(onlineManager.subscribe.bind(onlineManager), () => onlineManager.isOnline(), () => true);
+  const pending = useMutationState({ filters: { status: "pending", predicate: isSaveOf(sessionId) }, select: (m) => m.state.failureCount });
+  if (pending.length === 0) return { kind: "saved" };
+  const failing = !online || pending.some((failures) => failures > 0);
+  return { kind: failing ? "waiting" : "saving", count: pending.length };
+}
+
+export function useSessionLog(detail: SessionDetail) {
+  const queryClient = useQueryClient();
+  const [store] = useState(() => new SessionLogStore(detail.id, mergeLog(detail.events, pendingRequests(queryClient, detail.id))));
+  useEffect(() => registerLog(store), [store]);
+  const log = useSyncExternalStore(store.subscribe, store.getSnapshot, store.getSnapshot);
+  // One scope for the session: a photo is on the server before the event that names it is sent.
+  const scope = sessionScope(detail.id);
+  const { mutate: saveEvent } = useMutation({ ...sessionEventOptions(queryClient), scope });
+  const { mutate: savePhoto } = useMutation({ ...sessionPhotoOptions(), scope });
+  const save = useSaveState(detail.id);
+  return { store, log, save, saveEvent, savePhoto };
+}
+
+export type SessionLog = ReturnType<typeof useSessionLog>;
