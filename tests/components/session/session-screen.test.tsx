@@ -21,7 +21,7 @@ describe("the guided step screen", () => {
     await openSession();
     const answers = screen.getByRole("group", { name: "Answers" });
     for (const button of within(answers).getAllByRole("button")) expect(button).toBeDisabled();
-    expect(screen.getByText(/Read the WARNING panel above/)).toBeInTheDocument();
+    expect(screen.getByText(/Read the WARNING panel and press/)).toBeInTheDocument();
 
     await userEvent.setup().click(screen.getByRole("button", { name: "Read and understood" }));
     for (const button of within(answers).getAllByRole("button")) expect(button).toBeEnabled();

@@ -12,7 +12,7 @@ import { StepNote } from "./step-note.tsx";
 type RunStep = Exclude<CompiledStep, { kind: "finding" }>;
 
 function gateReasons(runner: SessionRunner, step: RunStep): string[] {
-  const reasons = runner.missingAcks.map((signal) => `Read the ${signal} panel above and press "Read and understood" first.`);
+  const reasons = runner.missingAcks.map((signal) => `Read the ${signal} panel and press "Read and understood" first.`);
   if (runner.photoMissing && step.photo) reasons.push(`Take the photo first: ${step.photo.prompt}.`);
   return reasons;
 }
@@ -31,16 +31,20 @@ export function StepScreen({ runner, step, unitSystem }: { runner: SessionRunner
       </header>
       <StepCautions step={step} acknowledged={runner.replayed.acknowledgements[step.id] ?? []} onAcknowledge={(signal) => runner.send({ type: "caution.acknowledge", stepId: step.id, signal })} />
       {step.misleads && <MisleadsNote text={step.misleads} />}
-      {step.photo && (
-        <PhotoRequest key={step.id} ask={step.photo} taken={runner.photos} onTake={(photo) => runner.takePhoto(step.id, photo)} />
-      )}
-      <GateNote reasons={reasons} />
+      {step.photo && <PhotoRequest key={step.id} ask={step.photo} taken={runner.photos} onTake={(photo) => runner.takePhoto(step.id, photo)} />}
       {step.kind === "reading" ? (
-        <ReadingEntry key={step.id} step={step} unitSystem={unitSystem} blocked={blocked} can={runner.can} onRecord={runner.send} />
+        <>
+          <GateNote reasons={reasons} />
+          <ReadingEntry key={step.id} step={step} unitSystem={unitSystem} blocked={blocked} can={runner.can} onRecord={runner.send} />
+        </>
       ) : (
-        <StepAnswers step={step} blocked={blocked} can={runner.can} onAnswer={runner.send} />
+        // Below the panels, but held at the foot of the screen while they are read: long safety text never hides the way on.
+        <div className="sticky bottom-0 z-10 -mx-3 flex flex-col gap-3 rounded-t-lg border-t-2 border-line-strong bg-surface px-3 pt-4 pb-5">
+          <GateNote reasons={reasons} />
+          <StepAnswers step={step} blocked={blocked} can={runner.can} onAnswer={runner.send} />
+        </div>
       )}
-      <div className="mt-4 flex flex-wrap items-start justify-between gap-6 border-t-2 border-line pt-5">
+      <div className="flex flex-wrap items-start justify-between gap-6 border-t-2 border-line pt-5">
         <StepNote key={step.id} stepId={step.id} notes={notes} onAdd={(text) => runner.send({ type: "note.add", stepId: step.id, text })} />
         {canGoBack && (
           <Button onClick={() => runner.send({ type: "step.back" })}>
