@@ -52,7 +52,7 @@ describe("a photo on the bench without a connection", () => {
     for (const button of within(answers).getAllByRole("button")) expect(button).toBeEnabled();
     await user.click(within(answers).getByRole("button", { name: "Yes, the cap is off" }));
     expect(screen.getByRole("heading", { level: 1, name: "Record the highest gauge reading" })).toBeInTheDocument();
-    expect(screen.getByText(/Waiting for the connection/)).toBeInTheDocument();
+    expect(screen.getByText("Waiting for the connection (2 answers and 1 photo kept on this tablet)")).toBeInTheDocument();
     expect(uploads).toHaveLength(0);
 
     onlineManager.setOnline(true);

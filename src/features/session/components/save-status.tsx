@@ -3,8 +3,11 @@ import type { SaveState } from "../lib/use-session-runner.ts";
 const words = (state: SaveState) => {
   if (state.kind === "saved") return "Saved";
   if (state.kind === "saving") return "Saving…";
-  const answers = state.count === 1 ? "1 answer" : `${state.count} answers`;
-  return `Waiting for the connection (${answers} kept on this tablet)`;
+  const answerCount = state.count - state.photos;
+  const parts = [];
+  if (answerCount > 0) parts.push(answerCount === 1 ? "1 answer" : `${answerCount} answers`);
+  if (state.photos > 0) parts.push(state.photos === 1 ? "1 photo" : `${state.photos} photos`);
+  return `Waiting for the connection (${parts.join(" and ")} kept on this tablet)`;
 };
 
 /** Always there and quiet: a shape and a word for each state, never colour alone. */

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
 import { latestReading } from "../../../../shared/flow/context.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
@@ -36,6 +36,11 @@ function LiveSession({ detail, compiled, unitSystem, session }: RunnerProps & { 
   const reading = recorded && recorded.event.type === "step.record" ? latestReading(replayed.context, recorded.event.stepId) : null;
   const direction = lastRequest?.event.type === "step.back" ? -1 : 1;
   const screenKey = reading ? `verdict-${recorded?.id}` : `${replayed.context.path.length}-${step.id}`;
+  // Each new screen starts at its top, where its title and safety panels are.
+  useEffect(() => {
+    const page = document.scrollingElement ?? document.documentElement;
+    page.scrollTop = 0;
+  }, [screenKey]);
 
   return (
     <div className="flex flex-col gap-6 pb-10">

@@ -8,7 +8,8 @@ import { sessionPhotoKey, sessionPhotoOptions } from "../api/upload-photo.ts";
 import { mergeLog } from "./event-log.ts";
 import { registerLog, SessionLogStore } from "./session-log-store.ts";
 
-export type SaveState = { kind: "saved" } | { kind: "saving"; count: number } | { kind: "waiting"; count: number };
+/** `count` is everything not yet on the server, `photos` the pictures among them. */
+export type SaveState = { kind: "saved" } | { kind: "saving"; count: number; photos: number } | { kind: "waiting"; count: number; photos: number };
 
 const saveKeys = new Set<unknown>([sessionEventKey[0], sessionPhotoKey[0]]);
 const isSaveOf = (sessionId: string) => (m: Mutation<unknown, Error, unknown>) =>
@@ -16,10 +17,13 @@ const isSaveOf = (sessionId: string) => (m: Mutation<unknown, Error, unknown>) =
 
 function useSaveState(sessionId: string): SaveState {
   const online = useSyncExternalStore(onlineManager.subscribe.bind(onlineManager), () => onlineManager.isOnline(), () => true);
-  const pending = useMutationState({ filters: { status: "pending", predicate: isSaveOf(sessionId) }, select: (m) => m.state.failureCount });
+  const pending = useMutationState({
+    filters: { status: "pending", predicate: isSaveOf(sessionId) },
+    select: (m) => ({ failures: m.state.failureCount, photo: m.options.mutationKey?.[0] === sessionPhotoKey[0] }),
+  });
   if (pending.length === 0) return { kind: "saved" };
-  const failing = !online || pending.some((failures) => failures > 0);
-  return { kind: failing ? "waiting" : "saving", count: pending.length };
+  const failing = !online || pending.some((p) => p.failures > 0);
+  return { kind: failing ? "waiting" : "saving", count: pending.length, photos: pending.filter((p) => p.photo).length };
 }
 
 export function useSessionLog(detail: SessionDetail) {
