@@ -1,74 +1,23 @@
-import { useEffect, useState } from "react";
 import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
-import { latestReading } from "../../../../shared/flow/context.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
-import { Button } from "../../../components/ui/button.tsx";
-import { useSessionLog, type SessionLog } from "../lib/use-session-log.ts";
-import { useSessionRunner } from "../lib/use-session-runner.ts";
+import { useSessionLog } from "../lib/use-session-log.ts";
 import { AbandonCheck } from "./abandon-dialog.tsx";
 import { FindingActions } from "./finding-actions.tsx";
-import { FindingSummary } from "./finding-screen.tsx";
-import { PathTrail } from "./path-trail.tsx";
-import { SaveStatus } from "./save-status.tsx";
-import { StepMotion } from "./step-motion.tsx";
-import { StepScreen } from "./step-screen.tsx";
-import { VerdictCard } from "./verdict-card.tsx";
+import { LiveSession } from "./live-session.tsx";
 
-interface RunnerProps {
-  detail: SessionDetail;
-  compiled: CompiledFlow;
-  unitSystem: "imperial" | "metric";
-}
-
-/** The guided check: the tablet's log of it, and a live screen remade whenever that log is put back on the server's. */
-export function SessionRunner(props: RunnerProps) {
-  const session = useSessionLog(props.detail);
-  return <LiveSession key={session.log.generation} session={session} {...props} />;
-}
-
-/** The machine says where the session stands, and the screen follows at once. */
-function LiveSession({ detail, compiled, unitSystem, session }: RunnerProps & { session: SessionLog }) {
-  const runner = useSessionRunner(detail, compiled, session);
-  const { step, replayed, lastRequest } = runner;
-  // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
-  const [seenVerdict, setSeenVerdict] = useState<string | null>(null);
-  const recorded = lastRequest?.event.type === "step.record" && lastRequest.id !== seenVerdict ? lastRequest : null;
-  const reading = recorded && recorded.event.type === "step.record" ? latestReading(replayed.context, recorded.event.stepId) : null;
-  const direction = lastRequest?.event.type === "step.back" ? -1 : 1;
-  const screenKey = reading ? `verdict-${recorded?.id}` : `${replayed.context.path.length}-${step.id}`;
-  // Each new screen starts at its top, where its title and safety panels are.
-  useEffect(() => {
-    const page = document.scrollingElement ?? document.documentElement;
-    page.scrollTop = 0;
-  }, [screenKey]);
-
+/** A real check on the bench: the tablet's log of it, saved to the server in order. */
+export function SessionRunner({ detail, compiled, unitSystem }: { detail: SessionDetail; compiled: CompiledFlow; unitSystem: "imperial" | "metric" }) {
+  const session = useSessionLog(detail);
   return (
-    <div className="flex flex-col gap-6 pb-10">
-      <div className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 border-b-2 border-line pb-3">
-        <PathTrail compiled={compiled} path={replayed.context.path} />
-        <SaveStatus state={runner.save} />
-      </div>
-      {runner.problem && (
-        <div role="alert" className="flex max-w-[70ch] flex-wrap items-center justify-between gap-3 rounded-lg border-2 border-problem bg-problem-soft px-4 py-3">
-          <p className="text-base font-medium">{runner.problem}</p>
-          <Button onClick={runner.dismissProblem}>Understood</Button>
-        </div>
-      )}
-      <StepMotion key={screenKey} direction={direction}>
-        {reading && recorded ? (
-          <VerdictCard step={compiled.steps[reading.stepId]!} reading={reading} altitudeM={replayed.context.altitudeM} onContinue={() => setSeenVerdict(recorded.id)} />
-        ) : step.kind === "finding" ? (
-          <>
-            <FindingSummary compiled={compiled} step={step} context={replayed.context} />
-            <FindingActions sessionId={detail.id} save={runner.save} />
-          </>
-        ) : (
-          <StepScreen runner={runner} step={step} unitSystem={unitSystem} />
-        )}
-      </StepMotion>
-      <div className="flex justify-end">
-        <AbandonCheck sessionId={detail.id} />
-      </div>
-    </div>
+    <LiveSession
+      key={session.log.generation}
+      sessionId={detail.id}
+      input={detail.input}
+      compiled={compiled}
+      unitSystem={unitSystem}
+      session={session}
+      findingActions={(save) => <FindingActions sessionId={detail.id} save={save} />}
+      footer={<AbandonCheck sessionId={detail.id} />}
+    />
   );
 }

@@ -4,7 +4,8 @@ import { useEffect, useState, useSyncExternalStore } from "react";
 import { onlineManager, useMutation, useMutationState, useQueryClient, type Mutation } from "@tanstack/react-query";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { pendingRequests, sessionEventKey, sessionEventOptions, sessionScope } from "../api/append-event.ts";
-import { sessionPhotoKey, sessionPhotoOptions } from "../api/upload-photo.ts";
+import { keepPhoto, sessionPhotoKey, sessionPhotoOptions, type PhotoVariables } from "../api/upload-photo.ts";
+import type { EventVariables } from "./event-log.ts";
 import { mergeLog } from "./event-log.ts";
 import { registerLog, SessionLogStore } from "./session-log-store.ts";
 
@@ -26,7 +27,18 @@ function useSaveState(sessionId: string): SaveState {
   return { kind: failing ? "waiting" : "saving", count: pending.length, photos: pending.filter((p) => p.photo).length };
 }
 
-export function useSessionLog(detail: SessionDetail) {
+/** What a session screen runs on: its log, its save state, and where answers and photos go. */
+export interface SessionLog {
+  store: SessionLogStore;
+  log: ReturnType<SessionLogStore["getSnapshot"]>;
+  save: SaveState;
+  saveEvent: (variables: EventVariables) => void;
+  savePhoto: (variables: PhotoVariables) => void;
+  /** Holds the picture until it is sent (or, in a sandbox, for as long as the screen is open). */
+  keepPhoto: (attachmentId: string, photo: Blob) => Promise<void>;
+}
+
+export function useSessionLog(detail: SessionDetail): SessionLog {
   const queryClient = useQueryClient();
   const [store] = useState(() => new SessionLogStore(detail.id, mergeLog(detail.events, pendingRequests(queryClient, detail.id))));
   useEffect(() => registerLog(store), [store]);
@@ -36,7 +48,5 @@ export function useSessionLog(detail: SessionDetail) {
   const { mutate: saveEvent } = useMutation({ ...sessionEventOptions(queryClient), scope });
   const { mutate: savePhoto } = useMutation({ ...sessionPhotoOptions(), scope });
   const save = useSaveState(detail.id);
-  return { store, log, save, saveEvent, savePhoto };
+  return { store, log, save, saveEvent, savePhoto, keepPhoto };
 }
-
-export type SessionLog = ReturnType<typeof useSessionLog>;

@@ -8,8 +8,9 @@ import { currentStepId } from "../../../../shared/flow/context.ts";
 import { machineFor } from "../../../../shared/flow/replay.ts";
 import { replaySession, unacknowledged } from "../../../../shared/flow/session-log.ts";
 import type { FlowEvent } from "../../../../shared/flow/schema.ts";
-import type { SessionDetail, SessionEventBody } from "../../../../shared/schemas/sessions.ts";
-import { keepPhoto, photoFileProblem } from "../api/upload-photo.ts";
+import type { FlowInput } from "../../../../shared/flow/step-rules.ts";
+import type { SessionEventBody } from "../../../../shared/schemas/sessions.ts";
+import { photoFileProblem } from "../api/upload-photo.ts";
 import type { SessionLog } from "./use-session-log.ts";
 
 export type { SaveState } from "./use-session-log.ts";
@@ -17,8 +18,13 @@ export type { SaveState } from "./use-session-log.ts";
 const flowEventTypes = new Set<SessionEventBody["type"]>(["step.answer", "step.record", "step.back", "session.restart"]);
 const isFlowEvent = (event: SessionEventBody): event is FlowEvent & SessionEventBody => flowEventTypes.has(event.type);
 
-function replayOrThrow(compiled: CompiledFlow, detail: SessionDetail, events: readonly SessionEventBody[]) {
-  const replayed = replaySession(compiled, detail.input, events);
+export interface RunTarget {
+  sessionId: string;
+  input: FlowInput;
+}
+
+function replayOrThrow(compiled: CompiledFlow, input: FlowInput, events: readonly SessionEventBody[]) {
+  const replayed = replaySession(compiled, input, events);
   if (!replayed.ok) throw new Error(`The saved session does not replay: ${replayed.reason}`);
   return replayed;
 }
@@ -27,14 +33,14 @@ function replayOrThrow(compiled: CompiledFlow, detail: SessionDetail, events: re
  * The screen's runner. Mount it under a key of `log.generation`: when the log is put back on the
  * server's, the actor starts again from the replayed log.
  */
-export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow, session: SessionLog) {
-  const { store, log, save, saveEvent, savePhoto } = session;
+export function useSessionRunner(run: RunTarget, compiled: CompiledFlow, session: SessionLog) {
+  const { store, log, save, saveEvent, savePhoto, keepPhoto } = session;
   const events = useMemo(() => log.requests.map((r) => r.event), [log.requests]);
-  const replayed = useMemo(() => replayOrThrow(compiled, detail, events), [compiled, detail, events]);
+  const replayed = useMemo(() => replayOrThrow(compiled, run.input, events), [compiled, run.input, events]);
 
   // The actor starts where the log stands when the screen mounts, then takes each flow event as it is given.
   const [start] = useState(() => replayed.snapshot);
-  const actor = useActorRef(machineFor(compiled), { input: detail.input, snapshot: start });
+  const actor = useActorRef(machineFor(compiled), { input: run.input, snapshot: start });
   const snapshot = useSelector(actor, (s) => s);
   const step: CompiledStep = compiled.steps[currentStepId(snapshot.context)]!;
 
@@ -46,7 +52,7 @@ export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow, 
 
   /** Why the shared rules refuse the event after the log, or null when they take it. */
   const refusal = (event: SessionEventBody): string | null => {
-    const check = replaySession(compiled, detail.input, [...store.getSnapshot().requests.map((r) => r.event), event]);
+    const check = replaySession(compiled, run.input, [...store.getSnapshot().requests.map((r) => r.event), event]);
     return check.ok ? null : check.reason;
   };
 
@@ -55,7 +61,7 @@ export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow, 
     const refused = refusal(event);
     if (refused) return refused;
     const request = store.append(event, uuidv7(), new Date());
-    saveEvent({ sessionId: detail.id, request });
+    saveEvent({ sessionId: run.sessionId, request });
     if (isFlowEvent(event)) actor.send(event);
     return null;
   };
@@ -71,7 +77,7 @@ export function useSessionRunner(detail: SessionDetail, compiled: CompiledFlow, 
     } catch {
       return "The tablet could not keep the photo (its storage may be full). Free some space and take it again.";
     }
-    savePhoto({ sessionId: detail.id, stepId, attachmentId });
+    savePhoto({ sessionId: run.sessionId, stepId, attachmentId });
     return send(event);
   };
 

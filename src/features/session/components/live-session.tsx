@@ -1,0 +1,74 @@
+import { useEffect, useState, type ReactNode } from "react";
+import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
+import { latestReading } from "../../../../shared/flow/context.ts";
+import type { FlowInput } from "../../../../shared/flow/step-rules.ts";
+import { Button } from "../../../components/ui/button.tsx";
+import type { SessionLog } from "../lib/use-session-log.ts";
+import { useSessionRunner, type SaveState } from "../lib/use-session-runner.ts";
+import { FindingSummary } from "./finding-screen.tsx";
+import { PathTrail } from "./path-trail.tsx";
+import { SaveStatus } from "./save-status.tsx";
+import { StepMotion } from "./step-motion.tsx";
+import { StepScreen } from "./step-screen.tsx";
+import { VerdictCard } from "./verdict-card.tsx";
+
+export interface LiveSessionProps {
+  sessionId: string;
+  input: FlowInput;
+  compiled: CompiledFlow;
+  unitSystem: "imperial" | "metric";
+  /** The log the screen runs on: the server's save line, or a sandbox that keeps nothing. */
+  session: SessionLog;
+  /** What the tech can do at the finding (complete the check, or run a simulation again). */
+  findingActions: (save: SaveState) => ReactNode;
+  /** Below every step: abandoning a real check, leaving a simulation. */
+  footer?: ReactNode;
+}
+
+/**
+ * The machine says where the session stands, and the screen follows at once. Mount it under a key of
+ * `session.log.generation`, so a log put back on the server's starts a fresh actor.
+ */
+export function LiveSession({ sessionId, input, compiled, unitSystem, session, findingActions, footer }: LiveSessionProps) {
+  const runner = useSessionRunner({ sessionId, input }, compiled, session);
+  const { step, replayed, lastRequest } = runner;
+  // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
+  const [seenVerdict, setSeenVerdict] = useState<string | null>(null);
+  const recorded = lastRequest?.event.type === "step.record" && lastRequest.id !== seenVerdict ? lastRequest : null;
+  const reading = recorded && recorded.event.type === "step.record" ? latestReading(replayed.context, recorded.event.stepId) : null;
+  const direction = lastRequest?.event.type === "step.back" ? -1 : 1;
+  const screenKey = reading ? `verdict-${recorded?.id}` : `${replayed.context.path.length}-${step.id}`;
+  // Each new screen starts at its top, where its title and safety panels are.
+  useEffect(() => {
+    const page = document.scrollingElement ?? document.documentElement;
+    page.scrollTop = 0;
+  }, [screenKey]);
+
+  return (
+    <div className="flex flex-col gap-6 pb-10">
+      <div className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 border-b-2 border-line pb-3">
+        <PathTrail compiled={compiled} path={replayed.context.path} />
+        <SaveStatus state={runner.save} />
+      </div>
+      {runner.problem && (
+        <div role="alert" className="flex max-w-[70ch] flex-wrap items-center justify-between gap-3 rounded-lg border-2 border-problem bg-problem-soft px-4 py-3">
+          <p className="text-base font-medium">{runner.problem}</p>
+          <Button onClick={runner.dismissProblem}>Understood</Button>
+        </div>
+      )}
+      <StepMotion key={screenKey} direction={direction}>
+        {reading && recorded ? (
+          <VerdictCard step={compiled.steps[reading.stepId]!} reading={reading} altitudeM={replayed.context.altitudeM} onContinue={() => setSeenVerdict(recorded.id)} />
+        ) : step.kind === "finding" ? (
+          <>
+            <FindingSummary compiled={compiled} step={step} context={replayed.context} />
+            {findingActions(runner.save)}
+          </>
+        ) : (
+          <StepScreen runner={runner} step={step} unitSystem={unitSystem} />
+        )}
+      </StepMotion>
+      {footer && <div className="flex justify-end">{footer}</div>}
+    </div>
+  );
+}
