@@ -25,6 +25,14 @@ function ClosedSession({ detail }: { detail: SessionDetail }) {
       <p role="status" className="max-w-[70ch] rounded-lg border-2 border-line-strong bg-raised px-5 py-4 text-lg font-semibold">
         {detail.status === "abandoned" ? "This check was abandoned." : closedWords[detail.reviewState]}
       </p>
+      {detail.reviewState === "returned" && detail.reviewComment && (
+        <section aria-labelledby="lead-comment" className="flex max-w-[70ch] flex-col gap-2 rounded-lg border-2 border-accent bg-accent-soft px-5 py-4">
+          <h2 id="lead-comment" className="text-lg font-semibold">
+            The shop lead says
+          </h2>
+          <p className="text-xl font-semibold whitespace-pre-line">{detail.reviewComment}</p>
+        </section>
+      )}
       {replayed.ok && step?.kind === "finding" && <FindingSummary compiled={compiled} step={step} context={replayed.context} />}
       <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
         Back to the bench
