@@ -17,6 +17,17 @@ export function formatInterval(from: Bound | null, to: Bound | null, unit: strin
   return `${lo}, ${hi} ${unit}`;
 }
 
+/** The same interval in shop words, e.g. "0.25 to under 0.36 mm", "over 0.36 mm", "up to 1 in". */
+export function describeInterval(from: Bound | null, to: Bound | null, unit: string): string {
+  if (from && to) {
+    if (from.value === to.value && from.inclusive && to.inclusive) return `${num(from.value)} ${unit}`;
+    return `${from.inclusive ? "" : "over "}${num(from.value)} to ${to.inclusive ? "" : "under "}${num(to.value)} ${unit}`;
+  }
+  if (from) return from.inclusive ? `${num(from.value)} ${unit} or more` : `over ${num(from.value)} ${unit}`;
+  if (to) return to.inclusive ? `up to ${num(to.value)} ${unit}` : `under ${num(to.value)} ${unit}`;
+  return "any value";
+}
+
 export function bandContains(band: Band, value: number): boolean {
   const { from, to } = band;
   const aboveFrom = from === null || value > from.value || (from.inclusive && value === from.value);

@@ -4,7 +4,7 @@ import { MAX_ALTITUDE_M, MIN_ALTITUDE_M } from "../calc/atmosphere.ts";
 import { evaluateCompression } from "../calc/compression.ts";
 import { canonicalUnit, checkReading, convert, isUnit, unitLabel, type Unit } from "../calc/units.ts";
 import { compressionReleaseValues, type EngineProfile } from "../equipment.ts";
-import { bandContains, formatInterval } from "./bands.ts";
+import { bandContains, describeInterval } from "./bands.ts";
 import type { CompiledStep } from "./compile.ts";
 import { DONE, type Verdict } from "./schema.ts";
 
@@ -132,6 +132,6 @@ export function evaluateReading(step: CompiledStep, value: unknown, unit: string
   const band = bands[index];
   const shown = `${fmt(check.value)} ${unitLabel(check.unit)}${check.unit === stepUnit ? "" : ` (${fmt(stepValue)} ${unitLabel(stepUnit)})`}`;
   if (!band) return { ok: false, code: "no_band", reason: `${shown} falls in none of this step's bands` };
-  const reason = `${shown} is in "${band.label}", ${formatInterval(band.from, band.to, unitLabel(stepUnit))}`;
+  const reason = `${shown} is in "${band.label}" (${describeInterval(band.from, band.to, unitLabel(stepUnit))})`;
   return readingResult(check, stepValue, stepUnit, canonical, { verdict: band.verdict, reason, label: band.label, outcome: `band:${index}`, next: band.next });
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { bandContains, checkBands, formatInterval } from "../../../shared/flow/bands.ts";
+import { bandContains, checkBands, describeInterval, formatInterval } from "../../../shared/flow/bands.ts";
 import type { Band, Bound } from "../../../shared/flow/schema.ts";
 import { validateFlow } from "../../../shared/flow/validate.ts";
 import { finding, flow, gapBands, gapReading } from "./fixtures.ts";
@@ -75,5 +75,18 @@ describe("bandContains and formatInterval", () => {
     expect(formatInterval(lo, { value: 0.36, inclusive: false }, "mm")).toBe("[0.25, 0.36) mm");
     expect(formatInterval(null, { value: 1, inclusive: true }, "in")).toBe("(-∞, 1] in");
     expect(formatInterval({ value: 1, inclusive: false }, null, "psi")).toBe("(1, +∞) psi");
+  });
+});
+
+describe("describeInterval", () => {
+  it("says each kind of end in words", () => {
+    const mm = (value: number, inclusive: boolean) => ({ value, inclusive });
+    expect(describeInterval(mm(0.25, true), mm(0.36, false), "mm")).toBe("0.25 to under 0.36 mm");
+    expect(describeInterval(mm(0.25, false), mm(0.36, true), "mm")).toBe("over 0.25 to 0.36 mm");
+    expect(describeInterval(mm(0.36, false), null, "mm")).toBe("over 0.36 mm");
+    expect(describeInterval(mm(0.36, true), null, "mm")).toBe("0.36 mm or more");
+    expect(describeInterval(null, mm(1, true), "in")).toBe("up to 1 in");
+    expect(describeInterval(null, mm(1, false), "in")).toBe("under 1 in");
+    expect(describeInterval(mm(2, true), mm(2, true), "in")).toBe("2 in");
   });
 });

@@ -52,7 +52,7 @@ describe("createFlowMachine", () => {
     const reading = latestReading(actor.getSnapshot().context, "gap")!;
     // Source: NIST SP 811 (2008), Appendix B.8, p. 50 — 1 in = 25.4 mm exactly, so 0.012 in = 0.3048 mm.
     expect(reading).toMatchObject({ value: 0.012, unit: "in", stepValue: 0.3048, stepUnit: "mm", canonical: 0.3048, canonicalUnit: "mm", verdict: "good", label: "Within range" });
-    expect(reading.reason).toBe('0.012 in (0.3048 mm) is in "Within range", [0.25, 0.36] mm');
+    expect(reading.reason).toBe('0.012 in (0.3048 mm) is in "Within range" (0.25 to 0.36 mm)');
   });
 
   it("lands a converted value on an inclusive band edge", () => {
