@@ -2,7 +2,7 @@ import { and, asc, eq } from "drizzle-orm";
 import { v7 as uuidv7 } from "uuid";
 import type { AppContext } from "../context.ts";
 import type { Database } from "../db/client.ts";
-import { diagnosticSessions, flows, flowVersions, sessionEvents, workOrders, type DiagnosticSessionRow, type SessionEventRow } from "../db/schema.ts";
+import { diagnosticSessions, flows, flowVersions, sessionEvents, units, workOrders, type DiagnosticSessionRow, type SessionEventRow } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
 import { conflict, notFound, unprocessable } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
@@ -78,8 +78,16 @@ export async function startSession(ctx: Pick<AppContext, "db">, user: PublicUser
 export async function getSessionDetail(ctx: Pick<AppContext, "db">, user: PublicUser, id: string): Promise<SessionDetail> {
   const session = await sessionFor(ctx.db, user, id, "session.read");
   const [meta] = await ctx.db
-    .select({ number: workOrders.number, flowId: flows.id, title: flows.title, version: flowVersions.number, definition: flowVersions.definition })
+    .select({
+      number: workOrders.number,
+      unit: { equipmentKind: units.equipmentKind, make: units.make, model: units.model },
+      flowId: flows.id,
+      title: flows.title,
+      version: flowVersions.number,
+      definition: flowVersions.definition,
+    })
     .from(workOrders)
+    .innerJoin(units, eq(units.id, workOrders.unitId))
     .innerJoin(flowVersions, eq(flowVersions.id, session.flowVersionId))
     .innerJoin(flows, eq(flows.id, flowVersions.flowId))
     .where(eq(workOrders.id, session.workOrderId));
@@ -89,6 +97,7 @@ export async function getSessionDetail(ctx: Pick<AppContext, "db">, user: Public
     id,
     workOrderId: session.workOrderId,
     workOrderNumber: meta!.number,
+    unit: meta!.unit,
     techId: session.techId,
     status: session.status,
     reviewState: session.reviewState,

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { equipmentKinds } from "../equipment.ts";
 import { flowEventSchema, signalWords } from "../flow/schema.ts";
 
 /** What a tablet may append to a session besides the flow's own events. */
@@ -32,6 +33,8 @@ export const sessionDetailSchema = z.object({
   id: z.string(),
   workOrderId: z.string(),
   workOrderNumber: z.number().int(),
+  /** The unit on the bench, so the screen always says which one the check is for. */
+  unit: z.object({ equipmentKind: z.enum(equipmentKinds), make: z.string(), model: z.string() }),
   techId: z.string(),
   status: z.enum(sessionStatuses),
   reviewState: z.enum(reviewStates),

@@ -42,6 +42,7 @@ export function buildSession(events: StoredEvent[] = []): SessionDetail {
     id: "se-1",
     workOrderId: "wo-1",
     workOrderNumber: 1042,
+    unit: { equipmentKind: "string_trimmer", make: "Fieldline", model: "FT-25" },
     techId: "user-apprentice",
     status: "open",
     reviewState: "not_submitted",

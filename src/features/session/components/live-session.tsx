@@ -23,13 +23,15 @@ export interface LiveSessionProps {
   findingActions: (save: SaveState) => ReactNode;
   /** Below every step: abandoning a real check, leaving a simulation. */
   footer?: ReactNode;
+  /** Which unit (or trial) this is, above every step, so two checks on one bench are never mixed up. */
+  subject: ReactNode;
 }
 
 /**
  * The machine says where the session stands, and the screen follows at once. Mount it under a key of
  * `session.log.generation`, so a log put back on the server's starts a fresh actor.
  */
-export function LiveSession({ sessionId, input, compiled, unitSystem, session, findingActions, footer }: LiveSessionProps) {
+export function LiveSession({ sessionId, input, compiled, unitSystem, session, findingActions, footer, subject }: LiveSessionProps) {
   const runner = useSessionRunner({ sessionId, input }, compiled, session);
   const { step, replayed, lastRequest } = runner;
   // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
@@ -47,7 +49,10 @@ export function LiveSession({ sessionId, input, compiled, unitSystem, session, f
   return (
     <div className="flex flex-col gap-6 pb-10">
       <div className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 border-b-2 border-line pb-3">
-        <PathTrail compiled={compiled} path={replayed.context.path} />
+        <div className="flex min-w-0 flex-col gap-1">
+          <p className="text-base font-semibold">{subject}</p>
+          <PathTrail compiled={compiled} path={replayed.context.path} />
+        </div>
         <SaveStatus state={runner.save} />
       </div>
       {runner.problem && (
@@ -62,7 +67,7 @@ export function LiveSession({ sessionId, input, compiled, unitSystem, session, f
         ) : step.kind === "finding" ? (
           <>
             <FindingSummary compiled={compiled} step={step} context={replayed.context} />
-            {findingActions(runner.save)}
+            <div className="sticky bottom-0 z-10 -mx-3 rounded-t-lg border-t-2 border-line-strong bg-surface px-3 pt-4 pb-5">{findingActions(runner.save)}</div>
           </>
         ) : (
           <StepScreen runner={runner} step={step} unitSystem={unitSystem} />

@@ -35,6 +35,7 @@ function SandboxRun({ compiled, input, unitSystem, onAgain, leave }: { compiled:
           </div>
         )}
         footer={leave}
+        subject={`Trial run · ${compiled.title}`}
       />
     </PhotoSourceContext.Provider>
   );

@@ -1,13 +1,21 @@
 import { useMemo } from "react";
 import { Link } from "react-router";
 import { useQuery } from "@tanstack/react-query";
-import { compileFlow } from "../../../../shared/flow/compile.ts";
+import { compileFlow, type CompiledFlow } from "../../../../shared/flow/compile.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { buttonClasses } from "../../../components/ui/button.tsx";
 import { sessionQueryOptions } from "../api/get-session.ts";
 import { SessionRunner } from "./session-runner.tsx";
 import { FindingSummary } from "./finding-screen.tsx";
 import { replaySession } from "../../../../shared/flow/session-log.ts";
+
+// A published version never changes: compile it once per version, however often its session is fetched again.
+const compiledVersions = new Map<string, CompiledFlow>();
+function compiledFor(detail: SessionDetail): CompiledFlow {
+  let compiled = compiledVersions.get(detail.flow.versionId);
+  if (!compiled) compiledVersions.set(detail.flow.versionId, (compiled = compileFlow(detail.definition)));
+  return compiled;
+}
 
 const closedWords: Record<SessionDetail["reviewState"], string> = {
   not_submitted: "This check is closed.",
@@ -17,7 +25,7 @@ const closedWords: Record<SessionDetail["reviewState"], string> = {
 };
 
 function ClosedSession({ detail }: { detail: SessionDetail }) {
-  const compiled = useMemo(() => compileFlow(detail.definition), [detail.definition]);
+  const compiled = compiledFor(detail);
   const replayed = useMemo(() => replaySession(compiled, detail.input, detail.events.map((e) => e.event)), [compiled, detail]);
   const step = replayed.ok ? compiled.steps[replayed.stepId] : undefined;
   return (
@@ -33,22 +41,22 @@ function ClosedSession({ detail }: { detail: SessionDetail }) {
           <p className="text-xl font-semibold whitespace-pre-line">{detail.reviewComment}</p>
         </section>
       )}
-      {replayed.ok && step?.kind === "finding" && <FindingSummary compiled={compiled} step={step} context={replayed.context} />}
       <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
         Back to the bench
       </Link>
+      {replayed.ok && step?.kind === "finding" && <FindingSummary compiled={compiled} step={step} context={replayed.context} />}
     </div>
   );
 }
 
 function OpenSession({ detail, unitSystem }: { detail: SessionDetail; unitSystem: "imperial" | "metric" }) {
-  // A pinned flow version never changes, so the compiled flow lives as long as the definition.
-  const compiled = useMemo(() => compileFlow(detail.definition), [detail.definition]);
+  const compiled = compiledFor(detail);
   return <SessionRunner detail={detail} compiled={compiled} unitSystem={unitSystem} />;
 }
 
 export function SessionPage({ sessionId, unitSystem }: { sessionId: string; unitSystem: "imperial" | "metric" }) {
-  const session = useQuery(sessionQueryOptions(sessionId));
+  // Opening a check always asks the server: the copy kept on the tablet may be a save or two behind.
+  const session = useQuery({ ...sessionQueryOptions(sessionId), refetchOnMount: "always" });
   if (session.isPending) return <p className="text-lg">Opening the check…</p>;
   if (session.isError && !session.data) {
     return (

@@ -1,4 +1,5 @@
 import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
+import { equipmentKindLabels } from "../../../../shared/equipment.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { useSessionLog } from "../lib/use-session-log.ts";
 import { AbandonCheck } from "./abandon-dialog.tsx";
@@ -18,6 +19,7 @@ export function SessionRunner({ detail, compiled, unitSystem }: { detail: Sessio
       session={session}
       findingActions={(save) => <FindingActions sessionId={detail.id} save={save} />}
       footer={<AbandonCheck sessionId={detail.id} />}
+      subject={`WO ${detail.workOrderNumber} · ${detail.unit.make} ${detail.unit.model} ${equipmentKindLabels[detail.unit.equipmentKind].toLowerCase()} · ${detail.flow.title}`}
     />
   );
 }

@@ -30,12 +30,14 @@ export function StepScreen({ runner, step, unitSystem }: { runner: SessionRunner
         {step.body && <p className="text-lg whitespace-pre-line">{step.body}</p>}
       </header>
       <StepCautions step={step} acknowledged={runner.replayed.acknowledgements[step.id] ?? []} onAcknowledge={(signal) => runner.send({ type: "caution.acknowledge", stepId: step.id, signal })} />
-      {step.misleads && <MisleadsNote text={step.misleads} />}
+      {step.misleads && step.kind !== "reading" && <MisleadsNote text={step.misleads} />}
       {step.photo && <PhotoRequest key={step.id} ask={step.photo} taken={runner.photos} onTake={(photo) => runner.takePhoto(step.id, photo)} />}
       {step.kind === "reading" ? (
         <>
           <GateNote reasons={reasons} />
           <ReadingEntry key={step.id} step={step} unitSystem={unitSystem} blocked={blocked} can={runner.can} onRecord={runner.send} />
+          {/* After the keypad: it is about what the number means, and the keypad must stay in view. */}
+          {step.misleads && <MisleadsNote text={step.misleads} />}
         </>
       ) : (
         // Below the panels, but held at the foot of the screen while they are read: long safety text never hides the way on.

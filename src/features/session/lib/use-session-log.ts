@@ -42,6 +42,11 @@ export function useSessionLog(detail: SessionDetail): SessionLog {
   const queryClient = useQueryClient();
   const [store] = useState(() => new SessionLogStore(detail.id, mergeLog(detail.events, pendingRequests(queryClient, detail.id))));
   useEffect(() => registerLog(store), [store]);
+  // The server's answer can arrive after the screen opened on the tablet's older copy: take it up.
+  useEffect(() => {
+    const known = new Set(store.getSnapshot().requests.map((r) => r.id));
+    if (detail.events.some((e) => !known.has(e.id))) store.resync(detail.events, pendingRequests(queryClient, detail.id), null);
+  }, [store, detail.events, detail.id, queryClient]);
   const log = useSyncExternalStore(store.subscribe, store.getSnapshot, store.getSnapshot);
   // One scope for the session: a photo is on the server before the event that names it is sent.
   const scope = sessionScope(detail.id);
