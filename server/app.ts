@@ -94,5 +94,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
 }
 
 function immutableAssets(res: express.Response, file: string) {
+  // The tablet asks for the service worker again on every visit, so a new build reaches it.
+  if (path.basename(file) === "sw.js") res.setHeader("Cache-Control", "no-cache");
   if (file.includes(`${path.sep}assets${path.sep}`)) res.setHeader("Cache-Control", "public, max-age=31536000, immutable");
 }

@@ -1,13 +1,13 @@
 import { useEffect, type ReactNode } from "react";
 import { MutationCache, QueryCache, QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { PersistQueryClientProvider, type Persister } from "@tanstack/react-query-persist-client";
+import type { Persister } from "@tanstack/react-query-persist-client";
 import { meQueryOptions } from "../features/auth/api/get-me.ts";
 import { signOut } from "../features/auth/api/sign-out.ts";
 import { registerSessionSaveDefaults } from "../features/session/api/append-event.ts";
 import { forgetKeptPhotos } from "../features/session/api/upload-photo.ts";
 import { isApiRequestError } from "../lib/api-client.ts";
 import { MotionProvider } from "../lib/motion.tsx";
-import { PERSIST_MAX_AGE_MS, persistDehydrateOptions, resumeRestoredSaves } from "./query-persistence.ts";
+import { PERSIST_MAX_AGE_MS } from "./query-persistence.ts";
 
 export function createQueryClient() {
   // Any 401 means the session has ended: the shell then sees no user and goes to sign-in.
@@ -49,22 +49,12 @@ function useForgetOnSignOut(queryClient: QueryClient, persister: Persister | und
   }, [queryClient, persister]);
 }
 
+/** The app's providers; a persister (see startPersistence) is only told when someone signs out. */
 export function AppProvider({ queryClient, persister, children }: { queryClient: QueryClient; persister?: Persister; children: ReactNode }) {
   useForgetOnSignOut(queryClient, persister);
-  if (!persister) {
-    return (
-      <QueryClientProvider client={queryClient}>
-        <MotionProvider>{children}</MotionProvider>
-      </QueryClientProvider>
-    );
-  }
   return (
-    <PersistQueryClientProvider
-      client={queryClient}
-      persistOptions={{ persister, maxAge: PERSIST_MAX_AGE_MS, dehydrateOptions: persistDehydrateOptions }}
-      onSuccess={() => resumeRestoredSaves(queryClient)}
-    >
+    <QueryClientProvider client={queryClient}>
       <MotionProvider>{children}</MotionProvider>
-    </PersistQueryClientProvider>
+    </QueryClientProvider>
   );
 }

@@ -1,7 +1,7 @@
 // The tablet keeps the query cache and unsent saves in IndexedDB, so answers survive a reload or a dead battery.
 import type { QueryClient } from "@tanstack/react-query";
 import { createAsyncStoragePersister } from "@tanstack/query-async-storage-persister";
-import type { Persister } from "@tanstack/react-query-persist-client";
+import { persistQueryClientRestore, persistQueryClientSubscribe, type Persister } from "@tanstack/react-query-persist-client";
 import { del, get, set } from "idb-keyval";
 
 /** A day: longer than a shift, short enough that an old cache never opens a stale check. */
@@ -25,4 +25,18 @@ export async function resumeRestoredSaves(queryClient: QueryClient) {
   const restored = queryClient.getMutationCache().getAll().filter((m) => m.state.status === "pending" && !m.state.isPaused);
   restored.forEach((m) => void m.continue().catch(() => undefined));
   await queryClient.resumePausedMutations();
+}
+
+/**
+ * Takes the tablet's kept cache and saves back before anything asks the server, then keeps them
+ * stored. Run before the router starts: with no connection, opening the app again then shows the
+ * signed-in person and their open check from what was kept, and the waiting saves go out later.
+ */
+export async function startPersistence(queryClient: QueryClient, persister: Persister): Promise<void> {
+  // The persist packages bring their own copy of query-core's types (a patch release behind); the
+  // client is the same object at run time, so it is passed as their type.
+  const client = queryClient as unknown as Parameters<typeof persistQueryClientRestore>[0]["queryClient"];
+  await persistQueryClientRestore({ queryClient: client, persister, maxAge: PERSIST_MAX_AGE_MS }).catch(() => undefined);
+  persistQueryClientSubscribe({ queryClient: client, persister, dehydrateOptions: persistDehydrateOptions });
+  void resumeRestoredSaves(queryClient);
 }
