@@ -15,7 +15,8 @@ describe("app shell", () => {
     stubApi(meAnswers(signedInAs(role)));
     const { router } = renderApp("/");
 
-    const nav = await screen.findByRole("navigation", { name: "Areas" });
+    // The first lazy route import in a run can take over a second to transform.
+    const nav = await screen.findByRole("navigation", { name: "Areas" }, { timeout: 5000 });
     const links = within(nav).getAllByRole("link");
     expect(links.map((link) => link.textContent)).toEqual(labels);
     expect(router.state.location.pathname).toBe(home);

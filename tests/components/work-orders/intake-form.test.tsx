@@ -88,9 +88,9 @@ describe("checking in a unit", () => {
     await fillValid(user);
     await user.click(screen.getByRole("button", { name: "Check in" }));
 
-    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"));
+    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"), { timeout: 5000 });
     expect(posted).toEqual(expectedBody);
-    expect(await screen.findByText("WO 1077")).toBeInTheDocument();
+    expect(await screen.findByText("WO 1077", {}, { timeout: 5000 })).toBeInTheDocument();
   });
 
   it("uploads the intake photo after the work order is made", async () => {
@@ -111,7 +111,7 @@ describe("checking in a unit", () => {
     await user.upload(screen.getByLabelText("Take a photo"), photo);
     await user.click(screen.getByRole("button", { name: "Check in" }));
 
-    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"));
+    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"), { timeout: 5000 });
     expect(uploads).toHaveLength(1);
     expect(uploads[0]!.get("photo")).toBe(photo);
   });
@@ -128,7 +128,7 @@ describe("checking in a unit", () => {
     await user.upload(screen.getByLabelText("Take a photo"), new File(["x"], "unit.jpg", { type: "image/jpeg" }));
     await user.click(screen.getByRole("button", { name: "Check in" }));
 
-    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"));
+    await waitFor(() => expect(router.state.location.pathname).toBe("/work-orders/wo-77"), { timeout: 5000 });
     expect(await screen.findByRole("alert")).toHaveTextContent("Checked in, but the photo of the unit did not save.");
     expect(screen.getByLabelText("Take a photo")).toHaveAccessibleDescription("The photo taken at check-in did not save: take it again, then save it.");
   });
