@@ -70,10 +70,13 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
   );
 
   const api = express.Router();
-  api.use(express.json({ limit: "100kb" }));
+  const resources = apiResources(ctx);
+  const ownBodies = resources.filter((r) => r.ownBodies).map((r) => r.base.replace(/^\/api/, ""));
+  const json = express.json({ limit: "100kb" });
+  api.use((req, res, next) => (ownBodies.some((base) => req.path === base || req.path.startsWith(`${base}/`)) ? next() : json(req, res, next)));
   api.use(requireSameOrigin(ctx.env.ALLOWED_ORIGINS));
   api.use(loadSession(ctx));
-  for (const resource of apiResources(ctx)) api.use(resource.base.replace(/^\/api/, ""), resource.router);
+  for (const resource of resources) api.use(resource.base.replace(/^\/api/, ""), resource.router);
   api.use(() => {
     throw new HttpError(404, "not_found", "There is no such API endpoint.");
   });

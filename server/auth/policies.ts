@@ -1,13 +1,16 @@
 import type { PublicUser, Role } from "../../shared/schemas/users.ts";
 import { forbidden } from "../lib/errors.ts";
 
-/** A record a policy can look at: who owns it, when ownership matters. */
+/** A record a policy can look at: who owns it, when ownership matters; for a flow, whether it is published and retired. */
 export interface OwnedRecord {
   ownerId?: string | null;
+  published?: boolean;
+  retired?: boolean;
 }
 
 const intakeRoles: readonly Role[] = ["apprentice", "senior_tech", "shop_lead"];
 const benchRoles: readonly Role[] = ["apprentice", "senior_tech", "shop_lead"];
+const flowEditorRoles: readonly Role[] = ["senior_tech", "shop_lead"];
 
 type Policy = (user: PublicUser, record: OwnedRecord | null) => boolean;
 
@@ -25,6 +28,10 @@ const policies: Record<string, Policy> = {
   "session.append": (user, record) => record?.ownerId === user.id,
   "session.read": (user, record) => record?.ownerId === user.id || user.role === "senior_tech" || user.role === "shop_lead",
   "session.abandon": (user, record) => record?.ownerId === user.id || user.role === "shop_lead",
+  // Everyone reads flows; apprentices only published, unretired ones (and never a draft: drafts need flow.edit).
+  "flow.read": (user, record) => flowEditorRoles.includes(user.role) || record === null || (record.published === true && record.retired !== true),
+  // Create, save drafts, publish, retire, import.
+  "flow.edit": (user) => flowEditorRoles.includes(user.role),
 };
 
 export type Action = keyof typeof policies;

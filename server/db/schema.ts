@@ -190,6 +190,23 @@ export const flowVersions = pgTable(
   (t) => [unique("flow_versions_flow_number_unique").on(t.flowId, t.number), check("flow_versions_number_positive", sql`${t.number} >= 1`)],
 );
 
+/** A flow's one draft: any JSON object (it may be unfinished); saved with optimistic concurrency on `revision`. */
+export const flowDrafts = pgTable(
+  "flow_drafts",
+  {
+    flowId: text("flow_id")
+      .primaryKey()
+      .references(() => flows.id, { onDelete: "cascade" }),
+    definition: jsonb("definition").$type<Record<string, unknown>>().notNull(),
+    revision: integer("revision").notNull().default(1),
+    /** The version the draft was started from; null for a new flow or an imported file. */
+    basedOnVersion: integer("based_on_version"),
+    updatedBy: text("updated_by").references(() => users.id, { onDelete: "set null" }),
+    updatedAt: updatedAt(),
+  },
+  (t) => [check("flow_drafts_revision_positive", sql`${t.revision} >= 1`)],
+);
+
 export const diagnosticSessions = pgTable(
   "diagnostic_sessions",
   {
@@ -220,6 +237,7 @@ export const diagnosticSessions = pgTable(
     uniqueIndex("diagnostic_sessions_one_open_idx").on(t.workOrderId, t.techId).where(sql`${t.status} = 'open'`),
     index("diagnostic_sessions_work_order_idx").on(t.workOrderId),
     index("diagnostic_sessions_tech_idx").on(t.techId, t.status),
+    index("diagnostic_sessions_flow_version_idx").on(t.flowVersionId, t.status),
   ],
 );
 
@@ -279,7 +297,11 @@ export const workOrdersRelations = relations(workOrders, ({ one, many }) => ({
 export const workOrderStateHistoryRelations = relations(workOrderStateHistory, ({ one }) => ({
   workOrder: one(workOrders, { fields: [workOrderStateHistory.workOrderId], references: [workOrders.id] }),
 }));
-export const flowsRelations = relations(flows, ({ many }) => ({ versions: many(flowVersions) }));
+export const flowsRelations = relations(flows, ({ one, many }) => ({ versions: many(flowVersions), draft: one(flowDrafts) }));
+export const flowDraftsRelations = relations(flowDrafts, ({ one }) => ({
+  flow: one(flows, { fields: [flowDrafts.flowId], references: [flows.id] }),
+  editor: one(users, { fields: [flowDrafts.updatedBy], references: [users.id] }),
+}));
 export const flowVersionsRelations = relations(flowVersions, ({ one }) => ({ flow: one(flows, { fields: [flowVersions.flowId], references: [flows.id] }) }));
 export const diagnosticSessionsRelations = relations(diagnosticSessions, ({ one, many }) => ({
   workOrder: one(workOrders, { fields: [diagnosticSessions.workOrderId], references: [workOrders.id] }),
@@ -296,7 +318,9 @@ export type ShopSettingsRow = typeof shopSettings.$inferSelect;
 export type CustomerRow = typeof customers.$inferSelect;
 export type UnitRow = typeof units.$inferSelect;
 export type WorkOrderRow = typeof workOrders.$inferSelect;
+export type FlowRow = typeof flows.$inferSelect;
 export type FlowVersionRow = typeof flowVersions.$inferSelect;
+export type FlowDraftRow = typeof flowDrafts.$inferSelect;
 export type DiagnosticSessionRow = typeof diagnosticSessions.$inferSelect;
 export type SessionEventRow = typeof sessionEvents.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;

@@ -4,7 +4,7 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { resolveSections } from "../../shared/flow/compile.ts";
 import { FlowInvalidError } from "../../shared/flow/problems.ts";
-import type { FlowDefinition } from "../../shared/flow/schema.ts";
+import type { FlowDefinition, SectionDefinition } from "../../shared/flow/schema.ts";
 
 export class BuiltInFlowError extends Error {
   constructor(message: string) {
@@ -34,14 +34,23 @@ function readJson(file: string): unknown {
 const jsonFiles = (dir: string) => (existsSync(dir) ? readdirSync(dir).filter((f) => f.endsWith(".json")).sort().map((f) => path.join(dir, f)) : []);
 
 let cached: { dir: string; flows: FlowDefinition[] } | null = null;
+let cachedSections: { dir: string; sections: SectionDefinition[] } | null = null;
+
+/** The shop's section library (flows/sections/*.json) as read, for validating drafts; unchecked here, the validator names what is wrong. */
+export function loadBuiltInSections(dir = flowsFolder()): SectionDefinition[] {
+  if (cachedSections?.dir === dir) return cachedSections.sections;
+  const sections = jsonFiles(path.join(dir, "sections")).map(readJson) as SectionDefinition[];
+  cachedSections = { dir, sections };
+  return sections;
+}
 
 /** Every built-in flow, validated and with its sections embedded; throws BuiltInFlowError naming the file and its problems. */
 export function loadBuiltInFlows(dir = flowsFolder()): FlowDefinition[] {
   if (cached?.dir === dir) return cached.flows;
-  const sections = jsonFiles(path.join(dir, "sections")).map(readJson);
+  const sections = loadBuiltInSections(dir);
   const flows = jsonFiles(dir).map((file) => {
     try {
-      return resolveSections(readJson(file), sections as never);
+      return resolveSections(readJson(file), sections);
     } catch (e) {
       if (!(e instanceof FlowInvalidError)) throw e;
       const problems = e.problems.filter((p) => p.severity === "error").map((p) => `  - ${p.stepId ? `step "${p.stepId}": ` : ""}${p.message}`);

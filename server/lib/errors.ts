@@ -22,3 +22,7 @@ export const conflict = (id: string, message: string, details?: unknown) => new 
 export const unprocessable = (id: string, message: string, details?: unknown) => new HttpError(422, id, message, details);
 export const tooManyRequests = (retryAfterSeconds: number, message: string) =>
   new HttpError(429, "too_many_attempts", message, { retryAfterSeconds }, { "Retry-After": String(retryAfterSeconds) });
+export const payloadTooLarge = (message: string) => new HttpError(413, "payload_too_large", message);
+
+/** A PostgreSQL unique violation (23505), as node-postgres and PGlite raise it through drizzle. */
+export const isUniqueViolation = (e: unknown) => (e as { code?: string } | null)?.code === "23505" || (e as { cause?: { code?: string } } | null)?.cause?.code === "23505";

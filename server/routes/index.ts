@@ -6,10 +6,13 @@ import { workOrdersRouter } from "./work-orders/router.ts";
 import { sessionsRouter } from "./sessions/router.ts";
 import { benchRouter } from "./sessions/bench-router.ts";
 import { attachmentsRouter } from "./attachments/router.ts";
+import { flowsRouter } from "./flows/router.ts";
 
 export interface ApiResource {
   base: string;
   router: Router;
+  /** The resource's routes read their own bodies (after their checks, with their own limits); the API's JSON parser leaves them alone. */
+  ownBodies?: boolean;
 }
 
 /** Every API resource and where it is mounted; the access-matrix test reads the routes from here. */
@@ -21,6 +24,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/sessions", router: sessionsRouter(ctx) },
     { base: "/api/bench", router: benchRouter(ctx) },
     { base: "/api/attachments", router: attachmentsRouter(ctx) },
+    { base: "/api/flows", router: flowsRouter(ctx), ownBodies: true },
   ];
 }
 

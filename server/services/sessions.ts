@@ -4,7 +4,7 @@ import type { AppContext } from "../context.ts";
 import type { Database } from "../db/client.ts";
 import { diagnosticSessions, flows, flowVersions, sessionEvents, units, workOrders, type DiagnosticSessionRow, type SessionEventRow } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
-import { conflict, notFound, unprocessable } from "../lib/errors.ts";
+import { conflict, isUniqueViolation, notFound, unprocessable } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
 import { appliesToUnit, compiledVersion, publishedFlows } from "./flows.ts";
 import { getSettings } from "./settings.ts";
@@ -34,13 +34,15 @@ export async function sessionEventsOf(db: Tx, sessionId: string): Promise<Sessio
   return db.select().from(sessionEvents).where(eq(sessionEvents.sessionId, sessionId)).orderBy(asc(sessionEvents.seq));
 }
 
-const isUniqueViolation = (e: unknown) => (e as { code?: string; cause?: { code?: string } })?.code === "23505" || (e as { cause?: { code?: string } })?.cause?.code === "23505";
-
 /** Starts a session on the flow's latest version, with the unit's engine facts and the shop's altitude fixed now. */
 export async function startSession(ctx: Pick<AppContext, "db">, user: PublicUser, workOrderId: string, flowId: string): Promise<string> {
   const order = await findWorkOrder(ctx, workOrderId);
   const [flow] = await publishedFlows(ctx.db, flowId);
-  if (!flow) throw notFound("There is no such flow.");
+  if (!flow) {
+    const [retired] = await ctx.db.select({ title: flows.title }).from(flows).where(and(eq(flows.id, flowId), eq(flows.retired, true)));
+    if (retired) throw unprocessable("flow_retired", `"${retired.title}" is retired: it starts no new sessions. Choose another check.`);
+    throw notFound("There is no such flow.");
+  }
   if (!appliesToUnit(flow.appliesTo, order.unit)) {
     throw unprocessable("flow_not_applicable", `"${flow.title}" is not written for this unit (${order.unit.equipmentKind}, ${order.unit.cycle}-stroke).`);
   }

@@ -14,6 +14,10 @@ export const problemSchema = z.object({
   severity: z.enum(["error", "warning"]),
 });
 
+/** Route parameters: any short text reaches the lookup, so an unknown id is a 404 rather than a 400. */
+export const flowParamsSchema = z.object({ id: z.string().min(1).max(80) });
+export const flowVersionParamsSchema = flowParamsSchema.extend({ number: z.coerce.number().int().min(1).max(1_000_000) });
+
 const person = z.object({ id: z.string(), name: z.string() }).nullable();
 
 /** GET /api/flows — one row per flow. Apprentices see published, unretired flows only and no drafts. */

@@ -10,6 +10,8 @@ export interface AccessFixtures {
   /** A work order's intake photo, and a photo on the foreign session. */
   workOrderPhotoId: string;
   foreignPhotoId: string;
+  /** A flow that has only a draft (never published): hidden from apprentices. */
+  draftOnlyFlowId: string;
 }
 const own = (f: AccessFixtures, who: Who) => f.ownSessionId[who === "anonymous" ? "apprentice" : who];
 /** A valid event for the session's first step that the flow refuses: it reaches the policy and the replay, and stores nothing. */
@@ -29,6 +31,9 @@ export interface AccessRow {
 
 const everyone = (status: number): Record<Who, number> => ({ anonymous: status, apprentice: status, senior_tech: status, shop_lead: status });
 const signedIn = (status: number): Record<Who, number> => ({ anonymous: 401, apprentice: status, senior_tech: status, shop_lead: status });
+/** Flow editing: senior techs and the shop lead get `status`, an apprentice 403. */
+const editors = (status: number): Record<Who, number> => ({ anonymous: 401, apprentice: 403, senior_tech: status, shop_lead: status });
+const FLOW = "/api/flows/handheld-2-stroke-no-start";
 
 /** Every /api route, with the status each kind of caller must get. A new route needs a row here. */
 export const accessMatrix: AccessRow[] = [
@@ -63,4 +68,21 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/sessions/:id/abandon", path: (f) => `/api/sessions/${f.foreignSessionId}/abandon`, body: { reason: "Matrix check" }, expect: { anonymous: 401, apprentice: 404, senior_tech: 404, shop_lead: 200 } },
 
   { method: "GET", route: "/api/bench/home", expect: signedIn(200) },
+
+  // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
+  { method: "GET", route: "/api/flows", expect: signedIn(200) },
+  { method: "POST", route: "/api/flows", body: {}, expect: editors(400) },
+  { method: "POST", route: "/api/flows/import", body: [], expect: editors(400) },
+  { method: "GET", route: "/api/flows/:id", path: FLOW, expect: signedIn(200) },
+  { method: "GET", route: "/api/flows/:id", path: (f) => `/api/flows/${f.draftOnlyFlowId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
+  { method: "PATCH", route: "/api/flows/:id", path: FLOW, body: {}, expect: editors(400) },
+  { method: "GET", route: "/api/flows/:id/versions/:number", path: `${FLOW}/versions/1`, expect: signedIn(200) },
+  { method: "POST", route: "/api/flows/:id/draft", path: `${FLOW}/draft`, body: { fromVersion: 0 }, expect: editors(400) },
+  { method: "PUT", route: "/api/flows/:id/draft", path: `${FLOW}/draft`, body: {}, expect: editors(400) },
+  { method: "DELETE", route: "/api/flows/:id/draft", path: `${FLOW}/draft`, expect: editors(404) },
+  { method: "POST", route: "/api/flows/:id/publish", path: `${FLOW}/publish`, body: {}, expect: editors(400) },
+  { method: "GET", route: "/api/flows/:id/export", path: `${FLOW}/export?version=1`, expect: signedIn(200) },
+  { method: "GET", route: "/api/flows/:id/export", path: (f) => `/api/flows/${f.draftOnlyFlowId}/export?version=draft`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
+  { method: "GET", route: "/api/flows/:id/export", path: `${FLOW}/export?version=draft`, expect: { anonymous: 401, apprentice: 403, senior_tech: 404, shop_lead: 404 } },
+  { method: "GET", route: "/api/flows/:id/advice", path: `${FLOW}/advice`, expect: signedIn(200) },
 ];

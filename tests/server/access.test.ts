@@ -7,6 +7,7 @@ import { accessMatrix, type AccessFixtures, type Who } from "./access-matrix.ts"
 import { buildUser } from "../factories/users.ts";
 import { buildSession } from "../factories/sessions.ts";
 import { buildWorkOrder } from "../factories/work-orders.ts";
+import { buildFlow, flowDefinition } from "../factories/flows.ts";
 import { installBuiltInFlows } from "../../server/services/flows.ts";
 import { savePhoto } from "../../server/services/attachments.ts";
 import { makeImage } from "../factories/images.ts";
@@ -31,7 +32,8 @@ beforeAll(async () => {
   const png = await makeImage("png");
   const workOrderPhotoId = (await savePhoto(t.ctx, lead, { type: "work_order", id: workOrderId, stepId: null }, png)).id;
   const foreignPhotoId = (await savePhoto(t.ctx, lead, { type: "session", id: foreign.id, stepId: "prepare/as-received" }, png)).id;
-  fixtures = { workOrderId, ownSessionId, foreignSessionId: foreign.id, workOrderPhotoId, foreignPhotoId };
+  const draftOnlyFlowId = (await buildFlow(t.ctx.db, { draft: flowDefinition("matrix-draft-only") as unknown as Record<string, unknown>, id: "matrix-draft-only" })).id;
+  fixtures = { workOrderId, ownSessionId, foreignSessionId: foreign.id, workOrderPhotoId, foreignPhotoId, draftOnlyFlowId };
 });
 afterAll(async () => {
   await t.close();
