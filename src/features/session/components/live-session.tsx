@@ -47,13 +47,13 @@ export function LiveSession({ sessionId, input, compiled, unitSystem, session, f
   }, [screenKey]);
 
   return (
-    <div className="flex flex-col gap-6 pb-10">
-      <div className="flex flex-wrap items-center justify-between gap-x-6 gap-y-2 border-b-2 border-line pb-3">
-        <div className="flex min-w-0 flex-col gap-1">
-          <p className="text-base font-semibold">{subject}</p>
-          <PathTrail compiled={compiled} path={replayed.context.path} />
+    <div className="flex flex-col gap-5 pb-10">
+      <div className="flex flex-col gap-1 border-b-2 border-line pb-2">
+        <div className="flex items-center justify-between gap-4">
+          <p className="min-w-0 truncate text-base font-semibold">{subject}</p>
+          <SaveStatus state={runner.save} />
         </div>
-        <SaveStatus state={runner.save} />
+        <PathTrail compiled={compiled} path={replayed.context.path} />
       </div>
       {runner.problem && (
         <div role="alert" className="flex max-w-[70ch] flex-wrap items-center justify-between gap-3 rounded-lg border-2 border-problem bg-problem-soft px-4 py-3">

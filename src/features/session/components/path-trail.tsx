@@ -4,15 +4,15 @@ import type { CompiledFlow } from "../../../../shared/flow/compile.ts";
 export function PathTrail({ compiled, path }: { compiled: CompiledFlow; path: readonly string[] }) {
   const earlier = path.slice(0, -1);
   // Only the latest few fit at arm's length; the count says how many came before.
-  const shown = earlier.slice(-3);
+  const shown = earlier.slice(-2);
   const hidden = earlier.length - shown.length;
   return (
     <nav aria-label="Steps so far" className="min-w-0">
-      <ol className="flex flex-wrap items-center gap-x-2 gap-y-1 text-base text-ink-muted">
+      <ol className="flex items-center gap-x-2 overflow-hidden text-base whitespace-nowrap text-ink-muted">
         <li className="tabular-figures">Step {path.length}</li>
-        {hidden > 0 && <li aria-label={`${hidden} earlier steps`}>· {hidden} earlier</li>}
+        {hidden > 0 && <li aria-label={`${hidden} steps before these`}>· {hidden} before</li>}
         {shown.map((id, index) => (
-          <li key={`${index}-${id}`} className="max-w-[22ch] truncate">
+          <li key={`${index}-${id}`} className="min-w-0 max-w-[32ch] truncate">
             <span aria-hidden="true">› </span>
             {compiled.steps[id]?.title ?? id}
           </li>

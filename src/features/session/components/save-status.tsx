@@ -17,7 +17,7 @@ export function SaveStatus({ state }: { state: SaveState }) {
       role="status"
       aria-live="polite"
       // Waiting is the one state the tech must notice: it stands out by a frame and weight, not colour alone.
-      className={`flex min-h-12 items-center gap-2 text-base ${state.kind === "waiting" ? "rounded-lg border-2 border-ink bg-sunken px-3 font-semibold text-ink" : "text-ink-muted"}`}
+      className={`flex min-h-12 shrink-0 items-center gap-2 text-base ${state.kind === "waiting" ? "rounded-lg border-2 border-ink bg-sunken px-3 font-semibold text-ink" : "text-ink-muted"}`}
       data-save-state={state.kind}
     >
       <svg viewBox="0 0 20 20" className="size-5 shrink-0" aria-hidden="true" focusable="false">

@@ -68,7 +68,7 @@ export function StartCheck({ workOrder }: { workOrder: WorkOrderDetail }) {
                   <span id={`flow-title-${flow.flowId}`} className="text-xl font-semibold">
                     {start.isPending && start.variables === flow.flowId ? `Starting ${flow.title}…` : flow.title}
                   </span>
-                  <span id={`flow-summary-${flow.flowId}`} className="text-base">
+                  <span id={`flow-summary-${flow.flowId}`} className="line-clamp-3 text-base">
                     {flow.summary}
                   </span>
                 </span>

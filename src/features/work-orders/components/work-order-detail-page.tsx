@@ -44,7 +44,7 @@ export function WorkOrderDetailPage() {
       {arrival?.photoNotSaved && !workOrder.intakePhotoId && (
         <FormProblem title="Checked in, but the photo of the unit did not save.">Take it again under “As received”.</FormProblem>
       )}
-      <div className="grid gap-8 landscape:grid-cols-[minmax(0,1.2fr)_minmax(0,1fr)]">
+      <div className="grid gap-8 landscape:grid-cols-2">
         <div className="flex flex-col gap-8 landscape:order-2">
           <StartCheck workOrder={workOrder} />
           <SessionList sessions={workOrder.sessions} />
