@@ -133,5 +133,6 @@ describe("machine properties", () => {
       }),
       { numRuns: 200 },
     );
-  });
+    // 200 random flows, each run to a finding: seconds of work, more when the machine is busy.
+  }, 30_000);
 });
