@@ -116,6 +116,22 @@ export function fakeFlowServer(detail: FlowDetail = buildDetail()): FakeFlowServ
         server.detail = { ...server.detail, versions: [version, ...server.detail.versions], draft: null };
         return json(version, { status: 201 });
       }
+      if (method === "PATCH" && path === `/api/flows/${flowId}`) {
+        server.detail = { ...server.detail, retired: (body as { retired: boolean }).retired };
+        return json(server.detail);
+      }
+      if (method === "DELETE" && path === `/api/flows/${flowId}/draft`) {
+        server.detail = { ...server.detail, draft: null };
+        return new Response(null, { status: 204 });
+      }
+      if (method === "POST" && path === `/api/flows/${flowId}/draft`) {
+        const fromVersion = (body as { fromVersion: number }).fromVersion;
+        server.detail = {
+          ...server.detail,
+          draft: { revision: 1, basedOnVersion: fromVersion, definition: buildDefinition(), problems: [], updatedAt: "2025-03-04T08:00:00.000Z", updatedBy: tomas },
+        };
+        return json(server.detail, { status: 201 });
+      }
       return undefined;
     },
   };

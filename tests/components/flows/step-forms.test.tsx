@@ -72,6 +72,9 @@ describe("a step's form", () => {
     await openStep("dead-coil");
     const user = userEvent.setup();
     await user.click(screen.getByRole("button", { name: "Add a repair" }));
+    // The new, empty repair is in the draft at once: the validator asks for its title.
+    const panel = screen.getByRole("region", { name: "Problems" });
+    expect(await within(panel).findByRole("button", { name: /Step “dead-coil”: repairs\[1\]\.title/ })).toBeInTheDocument();
     const hours = screen.getByRole("spinbutton", { name: "Repair 2 labour, hours" });
     await user.clear(hours);
     expect(await screen.findByText("Enter a number.")).toBeInTheDocument();

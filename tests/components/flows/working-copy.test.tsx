@@ -42,4 +42,18 @@ describe("the working copy on this computer", () => {
     expect(screen.getByText("All changes saved")).toBeInTheDocument();
     expect(window.localStorage.getItem(storageKey)).toBeNull();
   });
+
+  it("restores a copy made on an older revision as a clash to settle, not as a save over someone's work", async () => {
+    const mine = buildDefinition();
+    mine.title = "Spark plug check, mine";
+    window.localStorage.setItem(storageKey, JSON.stringify({ baseRevision: 3, definition: mine }));
+    const server = fakeFlowServer();
+    stubApi(seniorTech, server.route);
+    renderApp(`/flows/${flowId}`);
+    await editorOpened();
+    expect(screen.getByText("Your unsaved changes were restored from this computer.")).toBeInTheDocument();
+    expect(screen.getByRole("region", { name: /saved this draft while you were editing/ })).toBeInTheDocument();
+    expect(screen.getByRole("textbox", { name: /^Title/ })).toHaveValue("Spark plug check, mine");
+    expect(server.saves).toEqual([]);
+  });
 });

@@ -29,7 +29,7 @@ export function AddStepForm({ taken, initialId, onAdd, onCancel }: AddStepFormPr
     defaultValues: { kind: "instruction", id: initialId },
   });
   return (
-    <form noValidate aria-label="Add a step" onSubmit={handleSubmit(({ id, kind }) => onAdd(id, kind))} className="flex flex-col gap-4 rounded-xl border-2 border-line px-4 py-4">
+    <form noValidate aria-label="Add a step" data-native-undo onSubmit={handleSubmit(({ id, kind }) => onAdd(id, kind))} className="flex flex-col gap-4 rounded-xl border-2 border-line px-4 py-4">
       <h2 className="text-xl font-semibold">Add a step</h2>
       <SelectField id="add-step-kind" label="Kind" autoFocus error={errors.kind?.message} {...register("kind")}>
         {addableKinds.map((kind) => (

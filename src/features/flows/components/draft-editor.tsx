@@ -21,10 +21,14 @@ export interface DraftEditorProps {
   renderBandCoverage?: (props: BandCoverageProps) => ReactNode;
 }
 
-/** Ctrl/Cmd+Z undoes, Shift+Ctrl/Cmd+Z (or Ctrl+Y) redoes, wherever the focus is on the page. */
+/**
+ * Ctrl/Cmd+Z undoes, Shift+Ctrl/Cmd+Z (or Ctrl+Y) redoes, wherever the focus is on the page, except in
+ * fields that are not part of the draft (a new id, a publish note), marked `data-native-undo`.
+ */
 function useUndoKeys(undo: () => void, redo: () => void) {
   const onKey = useEffectEvent((event: KeyboardEvent) => {
     if (!(event.ctrlKey || event.metaKey) || event.altKey) return;
+    if (event.target instanceof Element && event.target.closest("[data-native-undo]")) return;
     const key = event.key.toLowerCase();
     if (key === "z") {
       event.preventDefault();

@@ -47,7 +47,7 @@ export function PublishDialog({ flowId, flush, onClose, onPublished }: PublishDi
   return (
     <Dialog title="Publish this draft" onClose={onClose}>
       <p className="max-w-[65ch]">Publishing makes the draft the flow's next version: new bench sessions start on it. Sessions already running keep the version they began on.</p>
-      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5">
+      <form noValidate onSubmit={onSubmit} data-native-undo className="flex flex-col gap-5">
         {notSaved && <FormProblem title="Not published: the draft could not be saved first.">Your changes are kept; see the save status, then try again.</FormProblem>}
         {publish.error && (
           <FormProblem title="The server did not publish the draft.">

@@ -25,6 +25,7 @@ export function RenameStepForm({ currentId, taken, onRename, onCancel }: RenameS
     <form
       noValidate
       aria-label="Rename the step"
+      data-native-undo
       onSubmit={handleSubmit(({ id }) => (id === currentId ? onCancel() : onRename(id)))}
       className="flex flex-col gap-3 rounded-lg border-2 border-line px-4 py-4"
     >

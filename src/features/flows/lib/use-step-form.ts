@@ -10,7 +10,10 @@ export type StepChange = (step: RawStep, field: string) => void;
 export const fieldId = (name: string) => `field-${name.replace(/\./g, "-")}`;
 
 export function useStepFormSync<T extends FieldValues, O>(form: UseFormReturn<T, unknown, O>, onChange: StepChange) {
-  const commit = useEffectEvent((values: T, name: string | undefined) => onChange(cleanStep(values), name ?? ""));
+  // Only a change to a field counts: validating on its own (a remount, a trigger) edits nothing.
+  const commit = useEffectEvent((values: T, name: string | undefined) => {
+    if (name !== undefined) onChange(cleanStep(values), name);
+  });
   const { subscribe, trigger } = form;
   useEffect(() => subscribe({ formState: { values: true }, callback: ({ values, name }) => commit(values, name) }), [subscribe]);
   // A step loaded with problems shows them beside its fields straight away.
