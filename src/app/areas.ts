@@ -60,7 +60,7 @@ export const areas: Record<AreaId, Area> = {
 export const areasByRole: Record<Role, readonly [AreaId, ...AreaId[]]> = {
   apprentice: ["bench", "work-orders"],
   senior_tech: ["flows", "bench", "work-orders"],
-  shop_lead: ["review", "insight", "work-orders", "settings", "people"],
+  shop_lead: ["review", "flows", "insight", "work-orders", "settings", "people"],
 };
 
 export function areasFor(role: Role): Area[] {

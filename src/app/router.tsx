@@ -9,10 +9,11 @@ import { AreaProblem } from "./routes/route-problem.tsx";
 import { RootProblem, StartingUp } from "./routes/root-problem.tsx";
 
 type AreaModule = () => Promise<{ Component: () => React.JSX.Element }>;
+type AreaWithChildren = "bench" | "work-orders" | "flows";
+const hasChildren = (id: AreaId): id is AreaWithChildren => id === "bench" || id === "work-orders" || id === "flows";
 
 // One chunk per area, so the bench never downloads the flow editor or the insight charts.
-const areaModules: Record<Exclude<AreaId, "bench" | "work-orders">, AreaModule> = {
-  flows: () => import("./routes/flows.tsx"),
+const areaModules: Record<Exclude<AreaId, AreaWithChildren>, AreaModule> = {
   review: () => import("./routes/review.tsx"),
   insight: () => import("./routes/insight.tsx"),
   settings: () => import("./routes/settings.tsx"),
@@ -33,9 +34,10 @@ function workOrderLoader(queryClient: QueryClient) {
 }
 
 // Areas with more than one screen load each screen on its own.
-function areaChildren(queryClient: QueryClient): Record<"bench" | "work-orders", RouteObject[]> {
+function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteObject[]> {
   const bench = () => import("./routes/bench.tsx");
   const workOrders = () => import("./routes/work-orders.tsx");
+  const flows = () => import("./routes/flows.tsx");
   return {
     bench: [
       { index: true, lazy: () => bench().then((module) => ({ Component: module.BenchHomeRoute })) },
@@ -50,12 +52,17 @@ function areaChildren(queryClient: QueryClient): Record<"bench" | "work-orders",
         lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderDetailRoute })),
       },
     ],
+    flows: [
+      { index: true, lazy: () => flows().then((module) => ({ Component: module.FlowListRoute })) },
+      { path: ":flowId", lazy: () => flows().then((module) => ({ Component: module.FlowEditorRoute })) },
+      { path: ":flowId/history", lazy: () => flows().then((module) => ({ Component: module.FlowHistoryRoute })) },
+    ],
   };
 }
 
 function areaRoute(queryClient: QueryClient, id: AreaId): RouteObject {
   const route = { path: areas[id].path.slice(1), loader: areaLoader(queryClient, id) };
-  if (id === "bench" || id === "work-orders") return { ...route, children: areaChildren(queryClient)[id] };
+  if (hasChildren(id)) return { ...route, children: areaChildren(queryClient)[id] };
   return { ...route, lazy: areaModules[id] };
 }
 

@@ -20,7 +20,7 @@ const homes = { apprentice: "/bench", senior_tech: "/flows", shop_lead: "/review
 const navigation = {
   apprentice: ["Bench", "Work orders"],
   senior_tech: ["Flows", "Bench", "Work orders"],
-  shop_lead: ["Review", "Shop insight", "Work orders", "Shop settings", "People"],
+  shop_lead: ["Review", "Flows", "Shop insight", "Work orders", "Shop settings", "People"],
 } as const;
 
 for (const [orientation, viewport] of Object.entries(viewports)) {
