@@ -56,6 +56,7 @@ function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteO
       { index: true, lazy: () => flows().then((module) => ({ Component: module.FlowListRoute })) },
       { path: ":flowId", lazy: () => flows().then((module) => ({ Component: module.FlowEditorRoute })) },
       { path: ":flowId/history", lazy: () => flows().then((module) => ({ Component: module.FlowHistoryRoute })) },
+      { path: ":flowId/simulate", lazy: () => flows().then((module) => ({ Component: module.FlowSimulateRoute })) },
     ],
   };
 }

@@ -45,8 +45,9 @@ describe("the drawings the editor hands out", () => {
     expect(Object.keys(last.definition.steps as object)).toContain("gap");
     expect(last.problems).toEqual([]);
     await waitFor(() => expect(seen.at(-1)!.selectedStepId).toBe("gap"));
-    await user.click(screen.getByRole("button", { name: "Edit step “gap”" }));
+    // The picked node's form opens below the map, without leaving it.
     expect(await screen.findByRole("heading", { level: 2, name: "Measure the plug gap" }, { timeout: 5000 })).toBeInTheDocument();
+    expect(screen.getByRole("button", { name: "Graph" })).toHaveAttribute("aria-pressed", "true");
   });
 
   it("has no view switch without a graph", async () => {

@@ -7,7 +7,7 @@ export const flowKeys = {
   version: (flowId: string, number: number) => [...flowKeys.all, "version", flowId, number] as const,
 };
 
-export function flowPath(flowId: string, screen?: "history") {
+export function flowPath(flowId: string, screen?: "history" | "simulate") {
   return `/flows/${encodeURIComponent(flowId)}${screen ? `/${screen}` : ""}`;
 }
 

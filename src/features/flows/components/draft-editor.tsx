@@ -1,11 +1,14 @@
 import { useEffect, useEffectEvent, useRef, useState, type ReactNode } from "react";
-import { useSearchParams } from "react-router";
+import { Link, useSearchParams } from "react-router";
+import { applyCheckOrder, checkChain } from "../../../../shared/flow/advice.ts";
 import type { FlowDetail } from "../../../../shared/schemas/flows.ts";
-import { Button } from "../../../components/ui/button.tsx";
+import { Button, buttonClasses } from "../../../components/ui/button.tsx";
+import { flowPath } from "../api/keys.ts";
 import { addStep, renameStep, stepChoices, stepsLeadingTo, stepsOf, withStep, withoutStep } from "../lib/draft-edits.ts";
 import { useDraftEditor, type ServerDraft } from "../lib/use-draft-editor.ts";
 import type { BandCoverageProps, FlowGraphProps } from "../lib/view-slots.ts";
 import { AddStepForm } from "./add-step-form.tsx";
+import { CheckOrderAdvice } from "./check-order-advice.tsx";
 import { ConflictPanel } from "./conflict-panel.tsx";
 import { DraftToolbar } from "./draft-toolbar.tsx";
 import { FlowDetailsForm, mergeDetails } from "./flow-details-form.tsx";
@@ -50,6 +53,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
   const editor = useDraftEditor(detail.id, draft);
   const [params, setParams] = useSearchParams();
   const [view, setView] = useState<"steps" | "graph">("steps");
+  const [showAdvice, setShowAdvice] = useState(false);
   const [adding, setAdding] = useState<string | null>(null);
   const [restoredShown, setRestoredShown] = useState(editor.restored);
   const refocus = useRef<string | null>(null);
@@ -90,29 +94,8 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
   const selectedStep = selected === null ? null : steps[selected];
   const stepProblems = problems.filter((p) => p.stepId === selected && selected !== null);
 
-  const editing = (
-    <div className="grid gap-6 lg:grid-cols-[minmax(16rem,22rem)_minmax(0,1fr)]">
-      <div className="flex flex-col gap-4">
-        <StepList steps={steps} start={definition.start} problems={problems} selected={selected} onSelect={select} />
-        {adding === null ? (
-          <Button className="self-start" onClick={() => setAdding("")}>
-            Add a step
-          </Button>
-        ) : (
-          <AddStepForm
-            key={adding}
-            taken={Object.keys(steps)}
-            initialId={adding}
-            onCancel={() => setAdding(null)}
-            onAdd={(id, kind) => {
-              editor.replace((d) => addStep(d, id, kind));
-              setAdding(null);
-              select(id);
-            }}
-          />
-        )}
-      </div>
-      {selected !== null && selectedStep ? (
+  const stepForm =
+    selected !== null && selectedStep ? (
         <StepEditor
           key={`${selected}:${generation}`}
           stepId={selected}
@@ -135,7 +118,31 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
           onAddStep={(id) => setAdding(id)}
           renderBandCoverage={renderBandCoverage}
         />
-      ) : (
+    ) : null;
+
+  const editing = (
+    <div className="grid gap-6 lg:grid-cols-[minmax(16rem,22rem)_minmax(0,1fr)]">
+      <div className="flex flex-col gap-4">
+        <StepList steps={steps} start={definition.start} problems={problems} selected={selected} onSelect={select} />
+        {adding === null ? (
+          <Button className="self-start" onClick={() => setAdding("")}>
+            Add a step
+          </Button>
+        ) : (
+          <AddStepForm
+            key={adding}
+            taken={Object.keys(steps)}
+            initialId={adding}
+            onCancel={() => setAdding(null)}
+            onAdd={(id, kind) => {
+              editor.replace((d) => addStep(d, id, kind));
+              setAdding(null);
+              select(id);
+            }}
+          />
+        )}
+      </div>
+      {stepForm ?? (
         <FlowDetailsForm
           key={`details:${generation}`}
           definition={definition}
@@ -160,6 +167,15 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
       )}
       {editor.conflict && <ConflictPanel conflict={editor.conflict} mine={definition} onLoadTheirs={editor.loadTheirs} onKeepMine={editor.keepMine} />}
       <ProblemsPanel problems={problems} onSelect={select} />
+      <div className="flex flex-wrap gap-3">
+        <Link to={flowPath(detail.id, "simulate")} className={buttonClasses()}>
+          Try the draft
+        </Link>
+        <Button aria-expanded={showAdvice} onClick={() => setShowAdvice(!showAdvice)}>
+          {showAdvice ? "Hide the check-order advice" : "Check-order advice"}
+        </Button>
+      </div>
+      {showAdvice && <CheckOrderAdvice flowId={detail.id} currentOrder={checkChain(definition)} onApply={(order) => editor.replace((d) => applyCheckOrder(d, order))} />}
       {renderGraph && (
         <div role="group" aria-label="View" className="flex gap-2">
           <Button aria-pressed={view === "steps"} variant={view === "steps" ? "primary" : "secondary"} onClick={() => setView("steps")}>
@@ -173,11 +189,8 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
       {renderGraph && view === "graph" ? (
         <div className="flex flex-col gap-3">
           {renderGraph({ definition, problems, selectedStepId: selected, onSelect: select })}
-          {selected !== null && (
-            <Button className="self-start" onClick={() => setView("steps")}>
-              Edit step “{selected}”
-            </Button>
-          )}
+          {/* A node picked on the map opens its form right below it. */}
+          {stepForm}
         </div>
       ) : (
         editing
