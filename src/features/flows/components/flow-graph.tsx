@@ -30,6 +30,12 @@ function toFlowNode(node: MapNode, placement: Placement, selectedStepId: string 
 
 const ZOOM = { duration: 200 };
 
+/** The nodes in the top rows of the map, where the flow begins. */
+function topNodes(nodes: readonly { id: string; position: { y: number } }[]): { id: string }[] {
+  const top = Math.min(...nodes.map((n) => n.position.y));
+  return nodes.filter((n) => n.position.y <= top + 600).map((n) => ({ id: n.id }));
+}
+
 function MapControls() {
   const { zoomIn, zoomOut, fitView } = useReactFlow();
   return (
@@ -93,7 +99,7 @@ export function FlowGraph({ definition, problems, selectedStepId, onSelect }: Fl
     <SelectStepContext value={onSelect}>
       <section
         aria-label="Flow map"
-        className="size-full min-h-96 overflow-hidden rounded-lg border-2 border-line bg-surface [--xy-background-color:var(--color-surface)] [--xy-edge-stroke-width:2] [--xy-edge-stroke:var(--color-line-strong)]"
+        className="h-[65vh] min-h-96 w-full overflow-hidden rounded-lg border-2 border-line bg-surface [--xy-background-color:var(--color-surface)] [--xy-edge-stroke-width:2] [--xy-edge-stroke:var(--color-line-strong)]"
       >
         <ReactFlow
           nodes={nodes}
@@ -101,6 +107,8 @@ export function FlowGraph({ definition, problems, selectedStepId, onSelect }: Fl
           nodeTypes={nodeTypes}
           edgeTypes={edgeTypes}
           fitView
+          // A long flow opens on its first steps at a readable size, not shrunk to fit whole.
+          fitViewOptions={{ nodes: topNodes(nodes), minZoom: 0.5, maxZoom: 1 }}
           minZoom={0.15}
           maxZoom={2}
           nodesDraggable={false}

@@ -1,7 +1,7 @@
 import { Link } from "react-router";
 import type { FlowListItem } from "../../../../shared/schemas/flows.ts";
 import { flowPath } from "../api/keys.ts";
-import { appliesToWords, countInWords, personName } from "../lib/flow-words.ts";
+import { appliesToWords, authorName, countInWords } from "../lib/flow-words.ts";
 
 export function RetiredMark() {
   return <span className="rounded border-2 border-line-strong px-2 text-base font-semibold text-ink-muted">Retired</span>;
@@ -30,7 +30,7 @@ export function FlowRows({ flows }: { flows: FlowListItem[] }) {
             <dl className="grid gap-x-6 gap-y-1 text-base landscape:grid-cols-4 portrait:grid-cols-2">
               <Fact term="Published">{flow.published ? `Version ${flow.published.number}` : "Not yet"}</Fact>
               <Fact term="Draft">{draftWords(flow.draft)}</Fact>
-              <Fact term="Last edited by">{flow.lastEditedBy || flow.draft || flow.published ? personName(flow.lastEditedBy) : "Nobody yet"}</Fact>
+              <Fact term="Last edited by">{flow.lastEditedBy || flow.draft || flow.published ? authorName(flow.lastEditedBy) : "Nobody yet"}</Fact>
               <Fact term="Sessions run">{String(flow.sessionCount)}</Fact>
             </dl>
           </Link>

@@ -1,7 +1,7 @@
 import type { FlowDetail } from "../../../../shared/schemas/flows.ts";
 import { buttonClasses } from "../../../components/ui/button.tsx";
 import { exportFileName, exportHref } from "../api/export-flow.ts";
-import { personName, timeInWords } from "../lib/flow-words.ts";
+import { authorName, personName, timeInWords } from "../lib/flow-words.ts";
 
 /** Every published version, newest first, and the draft above them when there is one. */
 export function VersionTable({ detail }: { detail: FlowDetail }) {
@@ -38,7 +38,7 @@ export function VersionTable({ detail }: { detail: FlowDetail }) {
           {versions.map((version) => (
             <tr key={version.number} className="border-b border-line align-top">
               <th scope="row" className="py-2 pr-4 font-semibold tabular-figures">{version.number}</th>
-              <td className="py-2 pr-4">{personName(version.createdBy)}</td>
+              <td className="py-2 pr-4">{authorName(version.createdBy)}</td>
               <td className="py-2 pr-4">{timeInWords(version.createdAt)}</td>
               <td className="py-2 pr-4">{version.note}</td>
               <td className="py-2 pr-4 text-right tabular-figures">{version.sessionCount}</td>

@@ -42,6 +42,11 @@ export function personName(person: { name: string } | null | undefined): string 
   return person?.name ?? "someone no longer in the shop";
 }
 
+/** Who wrote a version: built-in versions have no author in the shop. */
+export function authorName(person: { name: string } | null | undefined): string {
+  return person?.name ?? "Came with Benchpath";
+}
+
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 export function timeInWords(iso: string): string {
