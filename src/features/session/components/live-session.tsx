@@ -25,13 +25,15 @@ export interface LiveSessionProps {
   footer?: ReactNode;
   /** Which unit (or trial) this is, above every step, so two checks on one bench are never mixed up. */
   subject: ReactNode;
+  /** A trial run saves nothing, so it has no save state to show. */
+  showSaveStatus?: boolean;
 }
 
 /**
  * The machine says where the session stands, and the screen follows at once. Mount it under a key of
  * `session.log.generation`, so a log put back on the server's starts a fresh actor.
  */
-export function LiveSession({ sessionId, input, compiled, unitSystem, session, findingActions, footer, subject }: LiveSessionProps) {
+export function LiveSession({ sessionId, input, compiled, unitSystem, session, findingActions, footer, subject, showSaveStatus = true }: LiveSessionProps) {
   const runner = useSessionRunner({ sessionId, input }, compiled, session);
   const { step, replayed, lastRequest } = runner;
   // The verdict of a reading stays up until the tech goes on; a later event replaces it anyway.
@@ -51,7 +53,7 @@ export function LiveSession({ sessionId, input, compiled, unitSystem, session, f
       <div className="flex flex-col gap-1 border-b-2 border-line pb-2">
         <div className="flex items-center justify-between gap-4">
           <p className="min-w-0 truncate text-base font-semibold">{subject}</p>
-          <SaveStatus state={runner.save} />
+          {showSaveStatus && <SaveStatus state={runner.save} />}
         </div>
         <PathTrail compiled={compiled} path={replayed.context.path} />
       </div>

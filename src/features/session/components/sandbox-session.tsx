@@ -36,6 +36,7 @@ function SandboxRun({ compiled, input, unitSystem, onAgain, leave }: { compiled:
         )}
         footer={leave}
         subject={`Trial run · ${compiled.title}`}
+        showSaveStatus={false}
       />
     </PhotoSourceContext.Provider>
   );
