@@ -2,6 +2,7 @@ import type { Problem } from "../../../../shared/flow/problems.ts";
 import { stepKinds, type StepKind } from "../../../../shared/flow/schema.ts";
 import { kindOf, titleOf, type RawStep } from "../lib/draft-edits.ts";
 import { countInWords, stepKindLabels } from "../lib/flow-words.ts";
+import { stepOrder } from "../lib/step-order.ts";
 import { SeverityMark } from "./problem-list.tsx";
 
 interface StepListProps {
@@ -32,7 +33,7 @@ export function StepList({ steps, start, problems, selected, onSelect }: StepLis
         <li>
           <ListButton current={selected === null} onClick={() => onSelect(null)} title="Flow details" detail="Title, equipment, start" mark={flowMark} />
         </li>
-        {Object.entries(steps).map(([id, step]) => (
+        {stepOrder(steps, start).map((id) => [id, steps[id]!] as const).map(([id, step]) => (
           <li key={id}>
             <ListButton
               current={selected === id}
