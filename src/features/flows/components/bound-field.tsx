@@ -85,7 +85,7 @@ function BoundInput({ id, band, side, bound, onChange, onBlur, error }: BoundInp
 function Check({ id, label, checked, onChange }: { id: string; label: string; checked: boolean; onChange: (checked: boolean) => void }) {
   return (
     <label htmlFor={id} className="flex min-h-12 items-center gap-3 text-base">
-      <input id={id} type="checkbox" className="size-6 accent-accent" checked={checked} onChange={(event) => onChange(event.currentTarget.checked)} />
+      <input id={id} type="checkbox" className="size-6 shrink-0 accent-accent" checked={checked} onChange={(event) => onChange(event.currentTarget.checked)} />
       {label}
     </label>
   );

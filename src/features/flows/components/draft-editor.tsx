@@ -24,6 +24,9 @@ export interface DraftEditorProps {
   renderBandCoverage?: (props: BandCoverageProps) => ReactNode;
 }
 
+/** Where the picked step's form begins, to bring it into view in portrait. */
+const formTopId = "step-form-top";
+
 /**
  * Ctrl/Cmd+Z undoes, Shift+Ctrl/Cmd+Z (or Ctrl+Y) redoes, wherever the focus is on the page, except in
  * fields that are not part of the draft (a new id, a publish note), marked `data-native-undo`.
@@ -65,7 +68,9 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
   const selected = asked !== null && Object.prototype.hasOwnProperty.call(steps, asked) ? asked : null;
   const problems = validation.problems;
 
-  const select = (stepId: string | null) =>
+  const select = (stepId: string | null) => {
+    // Stacked (portrait), the form sits below the whole step list: bring it up to the one picked.
+    if (window.matchMedia?.("(max-width: 1023px)").matches) requestAnimationFrame(() => document.getElementById(formTopId)?.scrollIntoView?.({ block: "start" }));
     setParams(
       (current) => {
         const next = new URLSearchParams(current);
@@ -75,6 +80,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
       },
       { replace: true },
     );
+  };
 
   // Undo reloads the form; the field that had the focus gets it back.
   const travel = (move: () => void) => {
@@ -121,7 +127,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
     ) : null;
 
   const editing = (
-    <div className="grid gap-6 lg:grid-cols-[minmax(16rem,22rem)_minmax(0,1fr)]">
+    <div className="grid gap-6 lg:grid-cols-[minmax(14rem,18rem)_minmax(0,1fr)]">
       <div className="flex flex-col gap-4">
         <StepList steps={steps} start={definition.start} problems={problems} selected={selected} onSelect={select} />
         {adding === null ? (
@@ -142,6 +148,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
           />
         )}
       </div>
+      <div id={formTopId} className="scroll-mt-4">
       {stepForm ?? (
         <FlowDetailsForm
           key={`details:${generation}`}
@@ -150,6 +157,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
           onChange={(values, field) => editor.type((d) => mergeDetails(d, values), `flow:${field}`)}
         />
       )}
+      </div>
     </div>
   );
 

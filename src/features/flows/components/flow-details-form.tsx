@@ -83,7 +83,7 @@ export function FlowDetailsForm({ definition, choices, onChange }: FlowDetailsFo
                       <label key={choice.value} className="flex min-h-12 items-center gap-3">
                         <input
                           type="checkbox"
-                          className="size-6 accent-accent"
+                          className="size-6 shrink-0 accent-accent"
                           checked={chosen.has(choice.value)}
                           onChange={(event) => field.onChange(equipmentChoices.map((c) => c.value).filter((v) => (v === choice.value ? event.currentTarget.checked : chosen.has(v))))}
                         />
