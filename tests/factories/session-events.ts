@@ -10,6 +10,16 @@ export function moveEvent([stepId, answer]: Move): SessionEventBody {
   return typeof answer === "string" ? { type: "step.answer", stepId, value: answer } : { type: "step.record", stepId, value: answer.value, unit: answer.unit };
 }
 
+/** The shortest way to a finding in the handheld 2-stroke flow: the controls were not set for a start. */
+export const handheldToFinding: Move[] = [
+  ["prepare/protect", "done"],
+  ["prepare/as-received", "done"],
+  ["prepare/secure", "done"],
+  ["prepare/controls", "no"],
+  ["prepare/controls-retry", "done"],
+  ["prepare/controls-result", "yes"],
+];
+
 /** Each move preceded by what its step asks for first: DANGER/WARNING acknowledgements and a required photo. */
 export function gatedEvents(flow: CompiledFlow, moves: readonly Move[], photoId: (stepId: string) => string): SessionEventBody[] {
   return moves.flatMap((move) => {

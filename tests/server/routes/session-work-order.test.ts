@@ -4,7 +4,7 @@ import { createTestApp, type TestApp } from "../helpers/test-app.ts";
 import { signedInAs } from "../helpers/sign-in.ts";
 import { buildWorkOrder } from "../../factories/work-orders.ts";
 import { buildAttachment } from "../../factories/attachments.ts";
-import { appendRequests, gatedEvents, type Move } from "../../factories/session-events.ts";
+import { appendRequests, gatedEvents, handheldToFinding } from "../../factories/session-events.ts";
 import { diagnosticSessions, workOrders, workOrderStateHistory } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows } from "../../../server/services/flows.ts";
 
@@ -16,16 +16,6 @@ beforeAll(async () => {
   tech = await signedInAs(t, "apprentice");
 });
 afterAll(() => t.close());
-
-// The shortest way to a finding in the handheld 2-stroke flow: the controls were not set for a start.
-const toFinding: Move[] = [
-  ["prepare/protect", "done"],
-  ["prepare/as-received", "done"],
-  ["prepare/secure", "done"],
-  ["prepare/controls", "no"],
-  ["prepare/controls-retry", "done"],
-  ["prepare/controls-result", "yes"],
-];
 
 async function startSession(workOrderId: string): Promise<string> {
   const res = await tech.agent.post(`/api/work-orders/${workOrderId}/sessions`).send({ flowId: "handheld-2-stroke-no-start" });
@@ -51,7 +41,7 @@ describe("a session's end moves its work order on", () => {
     for (const step of Object.values(flow.steps)) {
       if (step.photo?.requirement === "required") photos.set(step.id, (await buildAttachment(t.ctx.db, { ownerType: "session", ownerId: sessionId, stepId: step.id })).id);
     }
-    for (const body of appendRequests(gatedEvents(flow, toFinding, (id) => photos.get(id)!))) {
+    for (const body of appendRequests(gatedEvents(flow, handheldToFinding, (id) => photos.get(id)!))) {
       expect((await tech.agent.post(`/api/sessions/${sessionId}/events`).send(body)).status).toBe(201);
     }
     expect((await tech.agent.post(`/api/sessions/${sessionId}/complete`)).status).toBe(200);

@@ -5,7 +5,7 @@ import { signedInAs } from "../helpers/sign-in.ts";
 import { buildWorkOrder } from "../../factories/work-orders.ts";
 import { buildSession, HANDHELD_2_STROKE } from "../../factories/sessions.ts";
 import { buildAttachment } from "../../factories/attachments.ts";
-import { appendRequests, gatedEvents, type Move } from "../../factories/session-events.ts";
+import { appendRequests, gatedEvents, handheldToFinding, type Move } from "../../factories/session-events.ts";
 import { auditLog, diagnosticSessions, sessionEvents, workOrders } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows } from "../../../server/services/flows.ts";
 import type { CompiledFlow } from "../../../shared/flow/compile.ts";
@@ -28,15 +28,6 @@ const safety: Move[] = [
   ["prepare/secure", "done"],
   ["prepare/controls", "yes"],
 ];
-const toFinding: Move[] = [
-  ["prepare/protect", "done"],
-  ["prepare/as-received", "done"],
-  ["prepare/secure", "done"],
-  ["prepare/controls", "no"],
-  ["prepare/controls-retry", "done"],
-  ["prepare/controls-result", "yes"],
-];
-
 /** A session of the tech's with photo rows ready for every step that requires one. */
 async function sessionWithPhotos(techId = tech.user.id): Promise<{ session: DiagnosticSessionRow; flow: CompiledFlow; photoFor: (stepId: string) => string }> {
   const session = await buildSession(t.ctx.db, { techId });
@@ -167,7 +158,7 @@ describe("completing and abandoning", () => {
     const early = await tech.agent.post(`/api/sessions/${session.id}/complete`);
     expect(early.status).toBe(422);
     expect(early.body.error.id).toBe("not_at_finding");
-    const events = gatedEvents(flow, toFinding, photoFor);
+    const events = gatedEvents(flow, handheldToFinding, photoFor);
     const bodies = appendRequests(events);
     await sendAll(session.id, bodies);
     const detail = await tech.agent.get(`/api/sessions/${session.id}`);
