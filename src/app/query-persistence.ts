@@ -4,6 +4,9 @@ import { createAsyncStoragePersister } from "@tanstack/query-async-storage-persi
 import { persistQueryClientRestore, persistQueryClientSubscribe, type Persister } from "@tanstack/react-query-persist-client";
 import { del, get, set } from "idb-keyval";
 
+/** How long opening the app waits for the kept cache. */
+const RESTORE_WAIT_MS = 3000;
+
 /** A day: longer than a shift, short enough that an old cache never opens a stale check. */
 export const PERSIST_MAX_AGE_MS = 24 * 60 * 60 * 1000;
 
@@ -36,7 +39,9 @@ export async function startPersistence(queryClient: QueryClient, persister: Pers
   // The persist packages bring their own copy of query-core's types (a patch release behind); the
   // client is the same object at run time, so it is passed as their type.
   const client = queryClient as unknown as Parameters<typeof persistQueryClientRestore>[0]["queryClient"];
-  await persistQueryClientRestore({ queryClient: client, persister, maxAge: PERSIST_MAX_AGE_MS }).catch(() => undefined);
+  // A browser whose storage never answers must not keep the app from opening: wait a few seconds at most.
+  const restored = persistQueryClientRestore({ queryClient: client, persister, maxAge: PERSIST_MAX_AGE_MS }).catch(() => undefined);
+  await Promise.race([restored, new Promise((resolve) => setTimeout(resolve, RESTORE_WAIT_MS))]);
   persistQueryClientSubscribe({ queryClient: client, persister, dehydrateOptions: persistDehydrateOptions });
   void resumeRestoredSaves(queryClient);
 }
