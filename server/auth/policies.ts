@@ -28,6 +28,11 @@ const policies: Record<string, Policy> = {
   "session.append": (user, record) => record?.ownerId === user.id,
   "session.read": (user, record) => record?.ownerId === user.id || user.role === "senior_tech" || user.role === "shop_lead",
   "session.abandon": (user, record) => record?.ownerId === user.id || user.role === "shop_lead",
+  // The shop lead signs off completed sessions; a tech sees the flags on their own.
+  "session.review": (user) => user.role === "shop_lead",
+  "session.flags": (user, record) => record?.ownerId === user.id || user.role === "shop_lead",
+  // The whole review queue; a tech's own list is narrowed to their sessions by the service.
+  "review.list_all": (user) => user.role === "shop_lead",
   // Everyone reads flows; apprentices only published, unretired ones (and never a draft: drafts need flow.edit).
   "flow.read": (user, record) => flowEditorRoles.includes(user.role) || record === null || (record.published === true && record.retired !== true),
   // Create, save drafts, publish, retire, import.

@@ -7,6 +7,7 @@ import { reviewStates, sessionStatuses } from "../../shared/schemas/sessions.ts"
 import type { FlowDefinition } from "../../shared/flow/schema.ts";
 import type { FlowInput } from "../../shared/flow/step-rules.ts";
 import type { SessionEventBody } from "../../shared/schemas/sessions.ts";
+import type { SessionFlag } from "../../shared/review/flags.ts";
 
 const createdAt = () => timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
@@ -228,6 +229,11 @@ export const diagnosticSessions = pgTable(
     reviewState: reviewStateEnum("review_state").notNull().default("not_submitted"),
     reviewerId: text("reviewer_id").references(() => users.id, { onDelete: "set null" }),
     reviewComment: text("review_comment"),
+    reviewedAt: at("reviewed_at"),
+    /** The automatic review flags, computed when the session is completed (null before). */
+    flags: jsonb("flags").$type<SessionFlag[]>(),
+    /** How many flags; 0 until the session is completed. Kept beside them so the queue can filter on it. */
+    flagCount: integer("flag_count").notNull().default(0),
     /** The machine's input, fixed when the session began so a replay always gives the same answer. */
     input: jsonb("input").$type<FlowInput>().notNull(),
     startedAt: at("started_at").notNull().defaultNow(),
@@ -238,6 +244,7 @@ export const diagnosticSessions = pgTable(
     index("diagnostic_sessions_work_order_idx").on(t.workOrderId),
     index("diagnostic_sessions_tech_idx").on(t.techId, t.status),
     index("diagnostic_sessions_flow_version_idx").on(t.flowVersionId, t.status),
+    index("diagnostic_sessions_review_idx").on(t.reviewState, t.startedAt),
   ],
 );
 

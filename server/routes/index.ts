@@ -7,6 +7,7 @@ import { sessionsRouter } from "./sessions/router.ts";
 import { benchRouter } from "./sessions/bench-router.ts";
 import { attachmentsRouter } from "./attachments/router.ts";
 import { flowsRouter } from "./flows/router.ts";
+import { reviewRouter } from "./review/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -25,6 +26,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/bench", router: benchRouter(ctx) },
     { base: "/api/attachments", router: attachmentsRouter(ctx) },
     { base: "/api/flows", router: flowsRouter(ctx), ownBodies: true },
+    { base: "/api/review", router: reviewRouter(ctx) },
   ];
 }
 

@@ -5,9 +5,10 @@ import { diagnosticSessions, workOrders } from "../db/schema.ts";
 import { conflict, unprocessable } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
 import { compiledVersion } from "./flows.ts";
-import { sessionEventsOf, sessionFor } from "./sessions.ts";
+import { sessionEventsOf, sessionFor, toStoredEvent } from "./sessions.ts";
 import { moveWorkOrder } from "./work-orders.ts";
 import { replaySession } from "../../shared/flow/session-log.ts";
+import { sessionFlags } from "../../shared/review/flags.ts";
 import type { PublicUser } from "../../shared/schemas/users.ts";
 
 const closed = () => conflict("session_closed", "This session is already completed or abandoned.");
@@ -38,13 +39,17 @@ export async function completeSession(ctx: Pick<AppContext, "db">, user: PublicU
     const session = await sessionFor(tx, user, id, "session.append", true);
     if (session.status !== "open") throw closed();
     const events = await sessionEventsOf(tx, id);
-    const result = replaySession(await compiledVersion(tx, session.flowVersionId), session.input, events.map((e) => e.payload));
+    const flow = await compiledVersion(tx, session.flowVersionId);
+    const result = replaySession(flow, session.input, events.map((e) => e.payload));
     if (!result.ok || result.status !== "finding") {
       throw unprocessable("not_at_finding", "The session can be completed only once it has reached a finding.", { stepId: result.stepId });
     }
+    const completedAt = new Date();
+    // Computed once, here, so the review queue can filter on the count.
+    const flags = sessionFlags({ flow, input: session.input, events: events.map(toStoredEvent), status: "completed", startedAt: session.startedAt, completedAt, now: completedAt });
     await tx
       .update(diagnosticSessions)
-      .set({ status: "completed", reviewState: "waiting", completedAt: new Date(), currentStepId: result.stepId, findingStepId: result.findingStepId })
+      .set({ status: "completed", reviewState: "waiting", completedAt, currentStepId: result.stepId, findingStepId: result.findingStepId, flags, flagCount: flags.length })
       .where(eq(diagnosticSessions.id, id));
     await moveOnAfterSession(tx, user, session.workOrderId, id, "completed");
     await recordAudit(tx, { userId: user.id, action: "session.completed", recordType: "diagnostic_session", recordId: id, details: { findingStepId: result.findingStepId } });

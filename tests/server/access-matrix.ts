@@ -58,6 +58,13 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/sessions/:id/complete", path: (f, who) => `/api/sessions/${own(f, who)}/complete`, expect: signedIn(422) },
   { method: "POST", route: "/api/sessions/:id/complete", path: (f) => `/api/sessions/${f.foreignSessionId}/complete`, expect: signedIn(404) },
   { method: "POST", route: "/api/sessions/:id/abandon", path: (f, who) => `/api/sessions/${own(f, who)}/abandon`, body: {}, expect: signedIn(400) },
+  // Review: only the shop lead signs off (and gets as far as the empty body); the flags are the lead's and the session's own tech's.
+  { method: "POST", route: "/api/sessions/:id/review", path: (f, who) => `/api/sessions/${own(f, who)}/review`, body: {}, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
+  { method: "POST", route: "/api/sessions/:id/review", path: (f) => `/api/sessions/${f.foreignSessionId}/review`, body: { decision: "approve" }, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 409 } },
+  { method: "GET", route: "/api/review/sessions", expect: signedIn(200) },
+  { method: "GET", route: "/api/review/sessions", path: "/api/review/sessions?reviewState=pending", expect: signedIn(400) },
+  { method: "GET", route: "/api/review/sessions/:id/flags", path: (f, who) => `/api/review/sessions/${own(f, who)}/flags`, expect: signedIn(200) },
+  { method: "GET", route: "/api/review/sessions/:id/flags", path: (f) => `/api/review/sessions/${f.foreignSessionId}/flags`, expect: { anonymous: 401, apprentice: 404, senior_tech: 404, shop_lead: 200 } },
   { method: "POST", route: "/api/sessions/:id/photos", path: (f, who) => `/api/sessions/${own(f, who)}/photos`, expect: signedIn(400) },
   { method: "POST", route: "/api/sessions/:id/photos", path: (f) => `/api/sessions/${f.foreignSessionId}/photos`, expect: signedIn(404) },
   { method: "GET", route: "/api/attachments/:id", path: (f) => `/api/attachments/${f.workOrderPhotoId}`, expect: signedIn(200) },

@@ -10,6 +10,9 @@ import { conflict, unprocessable } from "../../lib/errors.ts";
 import { photoUpload } from "../attachments/upload.ts";
 import { appendEvent } from "../../services/session-events.ts";
 import { abandonSession, completeSession } from "../../services/session-end.ts";
+import { reviewSession } from "../../services/review.ts";
+import { authorize } from "../../auth/policies.ts";
+import { reviewDecisionRequestSchema, type ReviewDecisionRequest } from "../../../shared/schemas/review.ts";
 import { idParamsSchema } from "../../../shared/schemas/work-orders.ts";
 import { abandonSessionRequestSchema, appendEventRequestSchema, sessionPhotoFieldsSchema, type AppendEventRequest } from "../../../shared/schemas/sessions.ts";
 
@@ -38,6 +41,17 @@ export function sessionsRouter(ctx: AppContext): Router {
   router.post("/:id/abandon", requireUser, validate({ params: idParamsSchema, body: abandonSessionRequestSchema }), async (req: Request, res: Response) => {
     const user = currentUser(res);
     await abandonSession(ctx, user, idOf(res), (req.body as z.output<typeof abandonSessionRequestSchema>).reason);
+    res.json(await getSessionDetail(ctx, user, idOf(res)));
+  });
+
+  // The role is checked before the body, so a tech is told 403 rather than what the form lacks.
+  const mayReview = (_req: Request, res: Response, next: () => void) => {
+    authorize(currentUser(res), "session.review");
+    next();
+  };
+  router.post("/:id/review", requireUser, validate({ params: idParamsSchema }), mayReview, validate({ body: reviewDecisionRequestSchema }), async (req: Request, res: Response) => {
+    const user = currentUser(res);
+    await reviewSession(ctx, user, idOf(res), req.body as ReviewDecisionRequest);
     res.json(await getSessionDetail(ctx, user, idOf(res)));
   });
 

@@ -1,0 +1,96 @@
+import { and, count, eq, gte, ilike, lt, or, sql, type SQL } from "drizzle-orm";
+import type { AppContext } from "../context.ts";
+import { customers, diagnosticSessions, flows, flowVersions, units, users, workOrders } from "../db/schema.ts";
+import { can } from "../auth/policies.ts";
+import { compiledVersion } from "./flows.ts";
+import type { ReviewQueueQuery, ReviewQueueResponse, ReviewSort } from "../../shared/schemas/review.ts";
+import type { PublicUser } from "../../shared/schemas/users.ts";
+
+const s = diagnosticSessions;
+const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
+const DAY_MS = 86_400_000;
+
+const sortColumns = { startedAt: s.startedAt, completedAt: s.completedAt, tech: users.name, flow: flows.title } satisfies Record<ReviewSort, unknown>;
+
+/** The filters as SQL; a tech (anyone without review.list_all) is held to their own sessions whatever they ask for. */
+function conditions(user: PublicUser, q: ReviewQueueQuery): SQL | undefined {
+  const where: (SQL | undefined)[] = [];
+  if (!can(user, "review.list_all")) where.push(eq(s.techId, user.id));
+  if (q.techId) where.push(eq(s.techId, q.techId));
+  if (q.flowId) where.push(eq(flows.id, q.flowId));
+  if (q.findingStepId) where.push(eq(s.findingStepId, q.findingStepId));
+  if (q.equipmentKind) where.push(eq(units.equipmentKind, q.equipmentKind));
+  // Whole UTC days, both ends included.
+  if (q.from) where.push(gte(s.startedAt, new Date(`${q.from}T00:00:00.000Z`)));
+  if (q.to) where.push(lt(s.startedAt, new Date(Date.parse(`${q.to}T00:00:00.000Z`) + DAY_MS)));
+  if (q.flagged !== undefined) where.push(q.flagged ? sql`${s.flagCount} > 0` : eq(s.flagCount, 0));
+  if (q.reviewState) where.push(eq(s.reviewState, q.reviewState));
+  if (q.search) {
+    const like = `%${escapeLike(q.search)}%`;
+    where.push(or(ilike(customers.name, like), ilike(units.make, like), ilike(units.model, like), ilike(sql`${units.make} || ' ' || ${units.model}`, like)));
+  }
+  return and(...where);
+}
+
+/**
+ * The review queue, a page at a time. Ties on the sort key fall back to the session id (ascending),
+ * and a session without a completion time sorts last either way, so pages never overlap.
+ */
+export async function reviewQueue(ctx: Pick<AppContext, "db">, user: PublicUser, q: ReviewQueueQuery): Promise<ReviewQueueResponse> {
+  const where = conditions(user, q);
+  const base = () =>
+    ctx.db
+      .select({
+        sessionId: s.id,
+        workOrderNumber: workOrders.number,
+        customer: customers.name,
+        unit: { equipmentKind: units.equipmentKind, make: units.make, model: units.model },
+        techId: s.techId,
+        techName: users.name,
+        flowId: flows.id,
+        flowTitle: flows.title,
+        version: flowVersions.number,
+        flowVersionId: s.flowVersionId,
+        findingStepId: s.findingStepId,
+        status: s.status,
+        reviewState: s.reviewState,
+        startedAt: s.startedAt,
+        completedAt: s.completedAt,
+        flagCount: s.flagCount,
+      })
+      .from(s)
+      .innerJoin(workOrders, eq(workOrders.id, s.workOrderId))
+      .innerJoin(customers, eq(customers.id, workOrders.customerId))
+      .innerJoin(units, eq(units.id, workOrders.unitId))
+      .innerJoin(users, eq(users.id, s.techId))
+      .innerJoin(flowVersions, eq(flowVersions.id, s.flowVersionId))
+      .innerJoin(flows, eq(flows.id, flowVersions.flowId));
+  const [totals] = await ctx.db
+    .select({ total: count() })
+    .from(s)
+    .innerJoin(workOrders, eq(workOrders.id, s.workOrderId))
+    .innerJoin(customers, eq(customers.id, workOrders.customerId))
+    .innerJoin(units, eq(units.id, workOrders.unitId))
+    .innerJoin(users, eq(users.id, s.techId))
+    .innerJoin(flowVersions, eq(flowVersions.id, s.flowVersionId))
+    .innerJoin(flows, eq(flows.id, flowVersions.flowId))
+    .where(where);
+  const direction = q.order === "asc" ? sql`asc` : sql`desc`;
+  const rows = await base()
+    .where(where)
+    .orderBy(sql`${sortColumns[q.sort]} ${direction} nulls last`, sql`${s.id} asc`)
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  const out: ReviewQueueResponse["rows"] = [];
+  for (const { flowId, flowTitle, version, flowVersionId, startedAt, completedAt, ...r } of rows) {
+    const finding = r.findingStepId ? (await compiledVersion(ctx.db, flowVersionId)).steps[r.findingStepId] : undefined;
+    out.push({
+      ...r,
+      flow: { flowId, title: flowTitle, version },
+      findingStepTitle: r.findingStepId ? (finding?.title ?? r.findingStepId) : null,
+      startedAt: startedAt.toISOString(),
+      completedAt: completedAt?.toISOString() ?? null,
+    });
+  }
+  return { rows: out, total: totals?.total ?? 0, page: q.page, pageSize: q.pageSize };
+}
