@@ -1,4 +1,5 @@
 import { and, count, eq, gte, ilike, lt, or, sql, type SQL } from "drizzle-orm";
+import type { PgSelect } from "drizzle-orm/pg-core";
 import type { AppContext } from "../context.ts";
 import { customers, diagnosticSessions, flows, flowVersions, units, users, workOrders } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
@@ -9,6 +10,17 @@ import type { PublicUser } from "../../shared/schemas/users.ts";
 const s = diagnosticSessions;
 const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 const DAY_MS = 86_400_000;
+
+/** The records a queue row reads from; the page and its total join the same way. */
+function withQueueJoins<T extends PgSelect>(query: T) {
+  return query
+    .innerJoin(workOrders, eq(workOrders.id, s.workOrderId))
+    .innerJoin(customers, eq(customers.id, workOrders.customerId))
+    .innerJoin(units, eq(units.id, workOrders.unitId))
+    .innerJoin(users, eq(users.id, s.techId))
+    .innerJoin(flowVersions, eq(flowVersions.id, s.flowVersionId))
+    .innerJoin(flows, eq(flows.id, flowVersions.flowId));
+}
 
 const sortColumns = { startedAt: s.startedAt, completedAt: s.completedAt, tech: users.name, flow: flows.title } satisfies Record<ReviewSort, unknown>;
 
@@ -59,24 +71,10 @@ export async function reviewQueue(ctx: Pick<AppContext, "db">, user: PublicUser,
         flagCount: s.flagCount,
       })
       .from(s)
-      .innerJoin(workOrders, eq(workOrders.id, s.workOrderId))
-      .innerJoin(customers, eq(customers.id, workOrders.customerId))
-      .innerJoin(units, eq(units.id, workOrders.unitId))
-      .innerJoin(users, eq(users.id, s.techId))
-      .innerJoin(flowVersions, eq(flowVersions.id, s.flowVersionId))
-      .innerJoin(flows, eq(flows.id, flowVersions.flowId));
-  const [totals] = await ctx.db
-    .select({ total: count() })
-    .from(s)
-    .innerJoin(workOrders, eq(workOrders.id, s.workOrderId))
-    .innerJoin(customers, eq(customers.id, workOrders.customerId))
-    .innerJoin(units, eq(units.id, workOrders.unitId))
-    .innerJoin(users, eq(users.id, s.techId))
-    .innerJoin(flowVersions, eq(flowVersions.id, s.flowVersionId))
-    .innerJoin(flows, eq(flows.id, flowVersions.flowId))
-    .where(where);
+      .$dynamic();
+  const [totals] = await withQueueJoins(ctx.db.select({ total: count() }).from(s).$dynamic()).where(where);
   const direction = q.order === "asc" ? sql`asc` : sql`desc`;
-  const rows = await base()
+  const rows = await withQueueJoins(base())
     .where(where)
     .orderBy(sql`${sortColumns[q.sort]} ${direction} nulls last`, sql`${s.id} asc`)
     .limit(q.pageSize)
