@@ -66,3 +66,19 @@ export async function abandonSession(ctx: Pick<AppContext, "db">, user: PublicUs
     await recordAudit(tx, { userId: user.id, action: "session.abandoned", recordType: "diagnostic_session", recordId: id, details: { reason } });
   });
 }
+
+/**
+ * The tech takes a session the shop lead returned back to the bench: it is open again where it
+ * stood, at its finding, so the tech can go back and redo what the comment asks. Every answer it had
+ * stays in the log; completing it again sends it back for review with fresh flags.
+ */
+export async function reopenSession(ctx: Pick<AppContext, "db">, user: PublicUser, id: string): Promise<void> {
+  await ctx.db.transaction(async (tx) => {
+    const session = await sessionFor(tx, user, id, "session.append", true);
+    if (session.status !== "completed" || session.reviewState !== "returned") {
+      throw conflict("not_returned", "Only a session the shop lead returned can be opened again.", { status: session.status, reviewState: session.reviewState });
+    }
+    await tx.update(diagnosticSessions).set({ status: "open", completedAt: null, flags: null, flagCount: 0 }).where(eq(diagnosticSessions.id, id));
+    await recordAudit(tx, { userId: user.id, action: "session.reopened", recordType: "diagnostic_session", recordId: id });
+  });
+}

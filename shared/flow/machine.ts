@@ -4,8 +4,11 @@
 // formats every transition of every state when the machine is created, and a machine with one state
 // per step took 40 ms or more to build for 1,000 steps here (over a second for 10,000), more than
 // the whole 20 ms budget for validate + compile + replay. With one state per kind the machine has a fixed size, the
-// step itself lives in context (path), guards read the compiled step map, and hasTag, can() and
-// final states work as before: a finding is still a final state tagged "finding".
+// step itself lives in context (path), guards read the compiled step map, and hasTag and can() work as before.
+//
+// A finding is not a final state: it is tagged "finding" and takes only "step.back", so a tech can
+// go back from a conclusion (for example when the shop lead returns the session) and every earlier
+// answer stays in the log. Nothing else follows a finding.
 import { assign, setup } from "xstate";
 import type { CompiledFlow, CompiledStep } from "./compile.ts";
 import { currentStepId, initialContext, type FlowContext } from "./context.ts";
@@ -13,9 +16,6 @@ import type { FlowEvent, StepKind } from "./schema.ts";
 import { answerTarget, evaluateReading, type FlowInput, type ReadingResult } from "./step-rules.ts";
 
 export type { FlowInput } from "./step-rules.ts";
-export interface FlowOutput {
-  findingStepId: string;
-}
 
 type RunKind = Exclude<StepKind, "section">;
 const runKinds: readonly RunKind[] = ["instruction", "choice", "reading", "finding"];
@@ -50,7 +50,6 @@ export function createFlowMachine(compiled: CompiledFlow) {
       context: {} as FlowContext,
       events: {} as FlowEvent,
       input: {} as FlowInput,
-      output: {} as FlowOutput,
       tags: {} as RunKind,
     },
     guards: {
@@ -117,9 +116,8 @@ export function createFlowMachine(compiled: CompiledFlow) {
       instruction: { tags: ["instruction"], on: { "step.answer": answer, "step.back": back } },
       choice: { tags: ["choice"], on: { "step.answer": answer, "step.back": back } },
       reading: { tags: ["reading"], on: { "step.record": record, "step.back": back } },
-      finding: { type: "final", tags: ["finding"] },
+      finding: { tags: ["finding"], on: { "step.back": back } },
     },
-    output: ({ context }) => ({ findingStepId: currentStepId(context) }),
   });
 }
 

@@ -81,8 +81,8 @@ export function replay(compiled: CompiledFlow, input: FlowInput, events: unknown
       const raw: unknown = events[index];
       const parsed = flowEventSchema.safeParse(raw);
       if (!parsed.success) return refusal(index, raw, "invalid_event", `the event is not a flow event: ${describeIssues(parsed.error.issues)}`, snapshot.context);
-      if (snapshot.status === "done") {
-        return refusal(index, raw, "session_finished", `the session already reached the finding "${currentStepId(snapshot.context)}"; nothing can follow it`, snapshot.context);
+      if (snapshot.hasTag("finding") && parsed.data.type !== "step.back") {
+        return refusal(index, raw, "session_finished", `the session already reached the finding "${currentStepId(snapshot.context)}"; only going back can follow it`, snapshot.context);
       }
       actor.send(parsed.data);
       const next = actor.getSnapshot();
@@ -94,7 +94,7 @@ export function replay(compiled: CompiledFlow, input: FlowInput, events: unknown
       snapshot = next;
     }
     const stepId = currentStepId(snapshot.context);
-    const finished = snapshot.status === "done";
+    const finished = snapshot.hasTag("finding");
     return {
       ok: true,
       stepId,

@@ -87,7 +87,7 @@ export function replaySession(compiled: CompiledFlow, input: FlowInput, events: 
         }
         continue;
       }
-      if (snapshot.status === "done") return refuse("session_finished", `the session already reached the finding "${here}"; nothing can follow it`);
+      if (snapshot.hasTag("finding") && event.type !== "step.back") return refuse("session_finished", `the session already reached the finding "${here}"; only going back can follow it`);
       if ((event.type === "step.answer" || event.type === "step.record") && event.stepId === here) {
         const gate = gateOf(step, annotations);
         if (gate) return refuse(gate.code, gate.reason);
@@ -102,7 +102,7 @@ export function replaySession(compiled: CompiledFlow, input: FlowInput, events: 
       snapshot = next;
     }
     const stepId = currentStepId(snapshot.context);
-    const finished = snapshot.status === "done";
+    const finished = snapshot.hasTag("finding");
     return {
       ok: true,
       stepId,

@@ -58,6 +58,9 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/sessions/:id/complete", path: (f, who) => `/api/sessions/${own(f, who)}/complete`, expect: signedIn(422) },
   { method: "POST", route: "/api/sessions/:id/complete", path: (f) => `/api/sessions/${f.foreignSessionId}/complete`, expect: signedIn(404) },
   { method: "POST", route: "/api/sessions/:id/abandon", path: (f, who) => `/api/sessions/${own(f, who)}/abandon`, body: {}, expect: signedIn(400) },
+  // Own open sessions were never returned; another's session is hidden from everyone but its tech.
+  { method: "POST", route: "/api/sessions/:id/reopen", path: (f, who) => `/api/sessions/${own(f, who)}/reopen`, expect: signedIn(409) },
+  { method: "POST", route: "/api/sessions/:id/reopen", path: (f) => `/api/sessions/${f.foreignSessionId}/reopen`, expect: signedIn(404) },
   // Review: only the shop lead signs off (and gets as far as the empty body); the flags are the lead's and the session's own tech's.
   { method: "POST", route: "/api/sessions/:id/review", path: (f, who) => `/api/sessions/${own(f, who)}/review`, body: {}, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
   { method: "POST", route: "/api/sessions/:id/review", path: (f) => `/api/sessions/${f.foreignSessionId}/review`, body: { decision: "approve" }, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 409 } },

@@ -9,7 +9,7 @@ import { compiledVersion } from "../../services/flows.ts";
 import { conflict, unprocessable } from "../../lib/errors.ts";
 import { photoUpload } from "../attachments/upload.ts";
 import { appendEvent } from "../../services/session-events.ts";
-import { abandonSession, completeSession } from "../../services/session-end.ts";
+import { abandonSession, completeSession, reopenSession } from "../../services/session-end.ts";
 import { reviewSession } from "../../services/review.ts";
 import { authorize } from "../../auth/policies.ts";
 import { reviewDecisionRequestSchema, type ReviewDecisionRequest } from "../../../shared/schemas/review.ts";
@@ -41,6 +41,12 @@ export function sessionsRouter(ctx: AppContext): Router {
   router.post("/:id/abandon", requireUser, validate({ params: idParamsSchema, body: abandonSessionRequestSchema }), async (req: Request, res: Response) => {
     const user = currentUser(res);
     await abandonSession(ctx, user, idOf(res), (req.body as z.output<typeof abandonSessionRequestSchema>).reason);
+    res.json(await getSessionDetail(ctx, user, idOf(res)));
+  });
+
+  router.post("/:id/reopen", requireUser, validate({ params: idParamsSchema }), async (_req: Request, res: Response) => {
+    const user = currentUser(res);
+    await reopenSession(ctx, user, idOf(res));
     res.json(await getSessionDetail(ctx, user, idOf(res)));
   });
 

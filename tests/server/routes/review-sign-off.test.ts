@@ -5,7 +5,7 @@ import { createTestApp, type TestApp } from "../helpers/test-app.ts";
 import { signedInAs } from "../helpers/sign-in.ts";
 import { buildSession } from "../../factories/sessions.ts";
 import { buildAttachment } from "../../factories/attachments.ts";
-import { appendRequests, gatedEvents, handheldToFinding } from "../../factories/session-events.ts";
+import { appendRequests, gatedEvents, handheldToFinding, moveEvent } from "../../factories/session-events.ts";
 import { auditLog, diagnosticSessions, sessionEvents } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows } from "../../../server/services/flows.ts";
 
@@ -67,6 +67,33 @@ describe("POST /api/sessions/:id/review", () => {
     expect(audit.map((a) => a.details)).toEqual([{ comment: comment.trim() }]);
     const home = await tech.agent.get("/api/bench/home");
     expect(home.body.returned.map((s: { sessionId: string; reviewComment: string }) => [s.sessionId, s.reviewComment])).toEqual([[session.id, comment.trim()]]);
+  });
+
+  it("lets the tech open a returned session again, go back from its finding, and send it for review once more", async () => {
+    const session = await completedByTech();
+    await lead.agent.post(`/api/sessions/${session.id}/review`).send({ decision: "return", comment: "Redo the last step." }).expect(200);
+    const before = await eventCount(session.id);
+    // Only the session's own tech reopens it.
+    expect((await lead.agent.post(`/api/sessions/${session.id}/reopen`)).status).toBe(404);
+    const reopened = await tech.agent.post(`/api/sessions/${session.id}/reopen`);
+    expect(reopened.status).toBe(200);
+    expect(reopened.body).toMatchObject({ status: "open", reviewState: "returned", reviewComment: "Redo the last step.", completedAt: null });
+    expect(reopened.body.findingStepId).not.toBeNull();
+    expect((await tech.agent.get("/api/bench/home")).body.open.map((s: { sessionId: string }) => s.sessionId)).toContain(session.id);
+    // Back from the finding, then the last answer again: the log only grows.
+    const again = appendRequests([{ type: "step.back" }, moveEvent(handheldToFinding[handheldToFinding.length - 1]!)], before + 1);
+    for (const body of again) await tech.agent.post(`/api/sessions/${session.id}/events`).send(body).expect(201);
+    await tech.agent.post(`/api/sessions/${session.id}/complete`).expect(200);
+    const row = await rowOf(session.id);
+    expect(row).toMatchObject({ status: "completed", reviewState: "waiting" });
+    expect(row.flags).not.toBeNull();
+    expect(await eventCount(session.id)).toBe(before + 2);
+    const audit = await t.ctx.db.select().from(auditLog).where(and(eq(auditLog.recordId, session.id), eq(auditLog.action, "session.reopened")));
+    expect(audit.map((a) => a.userId)).toEqual([tech.user.id]);
+    // Waiting for review again: not a returned session, so it cannot be reopened.
+    const twice = await tech.agent.post(`/api/sessions/${session.id}/reopen`);
+    expect(twice.status).toBe(409);
+    expect(twice.body.error.id).toBe("not_returned");
   });
 
   it("asks for a comment beside the field on a return, and refuses one over 2000 characters", async () => {

@@ -137,23 +137,29 @@ describe("createFlowMachine", () => {
     expect(context).toMatchObject({ path: ["start"], answers: [], readings: [], restarts: 1, seq: 4 });
   });
 
-  it("ends in a final state at a finding and takes nothing after it", () => {
+  it("stops at a finding, takes nothing there but going back, and goes back to the step before it", () => {
     const actor = start();
     actor.send(answer("start"));
     actor.send(answer("ask", "gap"));
     actor.send(record("gap", 0.1, "mm"));
     const snapshot = actor.getSnapshot();
-    expect(snapshot.status).toBe("done");
     expect(snapshot.hasTag("finding")).toBe(true);
-    expect(snapshot.output).toEqual({ findingStepId: "close" });
-    expect(snapshot.can(back)).toBe(false);
+    expect(currentStepId(snapshot.context)).toBe("close");
     expect(snapshot.can(restart)).toBe(false);
+    expect(snapshot.can(answer("close"))).toBe(false);
+    expect(snapshot.can(back)).toBe(true);
+    actor.send(back);
+    expect(actor.getSnapshot().hasTag("reading")).toBe(true);
+    expect(currentStepId(actor.getSnapshot().context)).toBe("gap");
+    // The reading taken before going back stays in the record.
+    expect(readingsByStep(actor.getSnapshot().context).gap).toHaveLength(1);
   });
 
   it("walks through both nested sections to the flow's own finding", () => {
     const actor = start();
     for (const e of [answer("start"), answer("ask", "gap"), record("gap", 0.3, "mm"), answer("check/clean"), answer("check/deeper/look", "ok")]) actor.send(e);
-    expect(actor.getSnapshot().output).toEqual({ findingStepId: "done" });
+    expect(actor.getSnapshot().hasTag("finding")).toBe(true);
+    expect(currentStepId(actor.getSnapshot().context)).toBe("done");
     expect(readingsByStep(actor.getSnapshot().context).gap).toHaveLength(1);
   });
 

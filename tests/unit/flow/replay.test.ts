@@ -82,10 +82,15 @@ describe("replay, refused", () => {
     expect(refused([...toGap, answer("gap", "done")])).toMatchObject({ code: "wrong_event_for_step" });
   });
 
-  it("refuses any event after a finding", () => {
-    const r = refused([...toGap, record("gap", 0.1, "mm"), back]);
+  it("refuses anything after a finding but going back", () => {
+    const r = refused([...toGap, record("gap", 0.1, "mm"), answer("close")]);
     expect(r).toMatchObject({ index: 3, code: "session_finished", stepId: "close" });
     expect(refused([...toGap, record("gap", 0.1, "mm"), restart]).code).toBe("session_finished");
+  });
+
+  it("goes back from a finding and reaches another one with the reading taken again", () => {
+    const r = replay(compiled, seaLevel, [...toGap, record("gap", 0.1, "mm"), back, record("gap", 0.3, "mm"), answer("check/clean"), answer("check/deeper/look", "ok")]);
+    expect(r).toMatchObject({ ok: true, status: "finding", findingStepId: "done" });
   });
 
   it("refuses going back from the first step", () => {

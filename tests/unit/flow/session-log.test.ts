@@ -58,12 +58,14 @@ describe("replaySession", () => {
     expect(nan).toMatchObject({ ok: false, index: events.length, code: "invalid_event" });
   });
 
-  it("ends at a finding, takes a note on it, and refuses any step event after it", () => {
+  it("ends at a finding, takes a note on it, and refuses any step event after it but going back", () => {
     const events = withGates(toFinding);
     const done = replaySession(flow, input, [...events, { type: "note.add", stepId: "prime/fuel/carb-varnish", text: "Varnish in the bowl" }]);
     expect(done).toMatchObject({ ok: true, status: "finding", findingStepId: "prime/fuel/carb-varnish" });
-    const after = replaySession(flow, input, [...events, { type: "step.back" }]);
+    const after = replaySession(flow, input, [...events, { type: "step.answer", stepId: "prime/fuel/carb-varnish", value: "done" }]);
     expect(after).toMatchObject({ ok: false, code: "session_finished", index: events.length });
+    const back = replaySession(flow, input, [...events, { type: "step.back" }]);
+    expect(back).toMatchObject({ ok: true, status: "in_progress", findingStepId: null });
   });
 
   it("goes back to the start on a restart, keeping the acknowledgements already given", () => {

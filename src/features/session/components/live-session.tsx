@@ -70,6 +70,14 @@ export function LiveSession({ sessionId, input, compiled, unitSystem, session, f
           <>
             <FindingSummary compiled={compiled} step={step} context={replayed.context} />
             <div className="sticky bottom-0 z-10 -mx-3 rounded-t-lg border-t-2 border-line-strong bg-surface px-3 pt-4 pb-5">{findingActions(runner.save)}</div>
+            {/* A conclusion can be taken back: the answers before it stay in the log. */}
+            {runner.can({ type: "step.back" }) && (
+              <div className="flex justify-end border-t-2 border-line pt-5">
+                <Button onClick={() => runner.send({ type: "step.back" })}>
+                  <span aria-hidden="true">‹</span> Back one step
+                </Button>
+              </div>
+            )}
           </>
         ) : (
           <StepScreen runner={runner} step={step} unitSystem={unitSystem} />

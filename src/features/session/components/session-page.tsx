@@ -3,7 +3,9 @@ import { Link } from "react-router";
 import { useQuery } from "@tanstack/react-query";
 import { compileFlow, type CompiledFlow } from "../../../../shared/flow/compile.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
-import { buttonClasses } from "../../../components/ui/button.tsx";
+import { Button, buttonClasses } from "../../../components/ui/button.tsx";
+import { FieldError } from "../../../components/ui/field-error.tsx";
+import { useReopenSession } from "../api/end-session.ts";
 import { sessionQueryOptions } from "../api/get-session.ts";
 import { SessionRunner } from "./session-runner.tsx";
 import { FindingSummary } from "./finding-screen.tsx";
@@ -24,6 +26,36 @@ const closedWords: Record<SessionDetail["reviewState"], string> = {
   returned: "The shop lead sent this check back.",
 };
 
+function LeadComment({ comment }: { comment: string }) {
+  return (
+    <section aria-labelledby="lead-comment" className="flex max-w-[70ch] flex-col gap-2 rounded-lg border-2 border-accent bg-accent-soft px-5 py-4">
+      <h2 id="lead-comment" className="text-lg font-semibold">
+        The shop lead says
+      </h2>
+      <p className="text-xl font-semibold whitespace-pre-line">{comment}</p>
+    </section>
+  );
+}
+
+/** A returned check goes back on the bench where it stood; the tech steps back from the finding to redo what was asked. */
+function ReviseActions({ sessionId }: { sessionId: string }) {
+  const reopen = useReopenSession(sessionId);
+  return (
+    <div className="flex max-w-[70ch] flex-col gap-3">
+      <div className="flex flex-wrap items-center gap-3">
+        <Button variant="primary" size="main" disabled={reopen.isPending} onClick={() => reopen.mutate()}>
+          {reopen.isPending ? "Opening…" : "Open the check again to revise it"}
+        </Button>
+        <Link to="/bench" className={buttonClasses({ size: "main" })}>
+          Back to the bench
+        </Link>
+      </div>
+      <p className="text-base">Every answer stays on record; going back and answering again shows as a revision.</p>
+      {reopen.isError && <FieldError id={`${sessionId}-reopen-error`} message={reopen.error.message} />}
+    </div>
+  );
+}
+
 function ClosedSession({ detail }: { detail: SessionDetail }) {
   const compiled = compiledFor(detail);
   const replayed = useMemo(() => replaySession(compiled, detail.input, detail.events.map((e) => e.event)), [compiled, detail]);
@@ -33,17 +65,14 @@ function ClosedSession({ detail }: { detail: SessionDetail }) {
       <p role="status" className="max-w-[70ch] rounded-lg border-2 border-line-strong bg-raised px-5 py-4 text-lg font-semibold">
         {detail.status === "abandoned" ? "This check was abandoned." : closedWords[detail.reviewState]}
       </p>
-      {detail.reviewState === "returned" && detail.reviewComment && (
-        <section aria-labelledby="lead-comment" className="flex max-w-[70ch] flex-col gap-2 rounded-lg border-2 border-accent bg-accent-soft px-5 py-4">
-          <h2 id="lead-comment" className="text-lg font-semibold">
-            The shop lead says
-          </h2>
-          <p className="text-xl font-semibold whitespace-pre-line">{detail.reviewComment}</p>
-        </section>
+      {detail.reviewState === "returned" && detail.reviewComment && <LeadComment comment={detail.reviewComment} />}
+      {detail.status === "completed" && detail.reviewState === "returned" ? (
+        <ReviseActions sessionId={detail.id} />
+      ) : (
+        <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
+          Back to the bench
+        </Link>
       )}
-      <Link to="/bench" className={`${buttonClasses({ variant: "primary", size: "main" })} self-start`}>
-        Back to the bench
-      </Link>
       {replayed.ok && step?.kind === "finding" && <FindingSummary compiled={compiled} step={step} context={replayed.context} />}
     </div>
   );
@@ -51,7 +80,12 @@ function ClosedSession({ detail }: { detail: SessionDetail }) {
 
 function OpenSession({ detail, unitSystem }: { detail: SessionDetail; unitSystem: "imperial" | "metric" }) {
   const compiled = compiledFor(detail);
-  return <SessionRunner detail={detail} compiled={compiled} unitSystem={unitSystem} />;
+  return (
+    <div className="flex flex-col gap-4">
+      {detail.reviewState === "returned" && detail.reviewComment && <LeadComment comment={detail.reviewComment} />}
+      <SessionRunner detail={detail} compiled={compiled} unitSystem={unitSystem} />
+    </div>
+  );
 }
 
 export function SessionPage({ sessionId, unitSystem }: { sessionId: string; unitSystem: "imperial" | "metric" }) {
