@@ -4,6 +4,7 @@ import type { AppContext } from "../context.ts";
 import { customers, diagnosticSessions, flows, flowVersions, units, users, workOrders } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
 import { compiledVersion } from "./flows.ts";
+import { DEFAULT_FLAG_LIMITS, type FlagLimits } from "../../shared/review/flags.ts";
 import type { ReviewQueueQuery, ReviewQueueResponse, ReviewSort } from "../../shared/schemas/review.ts";
 import type { PublicUser } from "../../shared/schemas/users.ts";
 
@@ -22,10 +23,19 @@ function withQueueJoins<T extends PgSelect>(query: T) {
     .innerJoin(flows, eq(flows.id, flowVersions.flowId));
 }
 
+/**
+ * A completed session's flags were counted when it was completed; an open one left longer than the
+ * shop's limit carries its open_too_long flag now, so the flagged filter finds stale checks too.
+ */
+function flagCountOf(now: Date, limits: FlagLimits) {
+  const cutoff = new Date(now.getTime() - limits.openHours * 3_600_000);
+  return sql<number>`(${s.flagCount} + case when ${s.status} = 'open' and ${s.startedAt} < ${cutoff} then 1 else 0 end)`.mapWith(Number);
+}
+
 const sortColumns = { startedAt: s.startedAt, completedAt: s.completedAt, tech: users.name, flow: flows.title } satisfies Record<ReviewSort, unknown>;
 
 /** The filters as SQL; a tech (anyone without review.list_all) is held to their own sessions whatever they ask for. */
-function conditions(user: PublicUser, q: ReviewQueueQuery): SQL | undefined {
+function conditions(user: PublicUser, q: ReviewQueueQuery, now: Date, limits: FlagLimits): SQL | undefined {
   const where: (SQL | undefined)[] = [];
   if (!can(user, "review.list_all")) where.push(eq(s.techId, user.id));
   if (q.techId) where.push(eq(s.techId, q.techId));
@@ -35,7 +45,7 @@ function conditions(user: PublicUser, q: ReviewQueueQuery): SQL | undefined {
   // Whole UTC days, both ends included.
   if (q.from) where.push(gte(s.startedAt, new Date(`${q.from}T00:00:00.000Z`)));
   if (q.to) where.push(lt(s.startedAt, new Date(Date.parse(`${q.to}T00:00:00.000Z`) + DAY_MS)));
-  if (q.flagged !== undefined) where.push(q.flagged ? sql`${s.flagCount} > 0` : eq(s.flagCount, 0));
+  if (q.flagged !== undefined) where.push(q.flagged ? sql`${flagCountOf(now, limits)} > 0` : sql`${flagCountOf(now, limits)} = 0`);
   if (q.reviewState) where.push(eq(s.reviewState, q.reviewState));
   if (q.search) {
     const like = `%${escapeLike(q.search)}%`;
@@ -48,8 +58,8 @@ function conditions(user: PublicUser, q: ReviewQueueQuery): SQL | undefined {
  * The review queue, a page at a time. Ties on the sort key fall back to the session id (ascending),
  * and a session without a completion time sorts last either way, so pages never overlap.
  */
-export async function reviewQueue(ctx: Pick<AppContext, "db">, user: PublicUser, q: ReviewQueueQuery): Promise<ReviewQueueResponse> {
-  const where = conditions(user, q);
+export async function reviewQueue(ctx: Pick<AppContext, "db">, user: PublicUser, q: ReviewQueueQuery, now = new Date(), limits: FlagLimits = DEFAULT_FLAG_LIMITS): Promise<ReviewQueueResponse> {
+  const where = conditions(user, q, now, limits);
   const base = () =>
     ctx.db
       .select({
@@ -68,7 +78,7 @@ export async function reviewQueue(ctx: Pick<AppContext, "db">, user: PublicUser,
         reviewState: s.reviewState,
         startedAt: s.startedAt,
         completedAt: s.completedAt,
-        flagCount: s.flagCount,
+        flagCount: flagCountOf(now, limits),
       })
       .from(s)
       .$dynamic();

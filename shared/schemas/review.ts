@@ -57,7 +57,7 @@ export const reviewQueueRowSchema = z.object({
   reviewState: z.enum(reviewStates),
   startedAt: z.string(),
   completedAt: z.string().nullable(),
-  /** Counted when the session was completed; 0 for a session not yet completed. */
+  /** Counted when the session was completed; an open session counts its open_too_long flag once it is past the shop's limit. */
   flagCount: z.number().int(),
 });
 export type ReviewQueueRow = z.infer<typeof reviewQueueRowSchema>;

@@ -6,7 +6,8 @@ import { buildSession } from "../../factories/sessions.ts";
 import { buildCustomer, buildWorkOrder } from "../../factories/work-orders.ts";
 import { users } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows, publishedFlows } from "../../../server/services/flows.ts";
-import type { ReviewQueueRow } from "../../../shared/schemas/review.ts";
+import { reviewQueueQuerySchema, type ReviewQueueRow } from "../../../shared/schemas/review.ts";
+import { reviewQueue } from "../../../server/services/review-queue.ts";
 import type { EquipmentKind } from "../../../shared/equipment.ts";
 
 let t: TestApp;
@@ -48,16 +49,18 @@ beforeAll(async () => {
     const startedAt = new Date(Date.UTC(2026, 2, 2 + ((i * 13) % 20), 9));
     const completedAt = status === "completed" ? new Date(startedAt.getTime() + ((i % 4) + 1) * 3_600_000) : null;
     const finding = status === "completed" ? flow.findings[i % 2]! : null;
-    const flagCount = status === "completed" ? (i * 5) % 4 : 0;
+    const storedFlags = status === "completed" ? (i * 5) % 4 : 0;
     const wo = await buildWorkOrder(t.ctx.db, { customerId: customer.id, createdBy: lead.user.id, state: "diagnosing", unit: { equipmentKind, make, model } });
     const session = await buildSession(t.ctx.db, {
-      flowVersionId: flow.versionId, techId: tech.user.id, workOrderId: wo.id, status, reviewState, startedAt, completedAt, findingStepId: finding?.id ?? null, flagCount,
+      flowVersionId: flow.versionId, techId: tech.user.id, workOrderId: wo.id, status, reviewState, startedAt, completedAt, findingStepId: finding?.id ?? null, flagCount: storedFlags,
       ...(status === "abandoned" ? { abandonReason: "Customer collected it" } : {}),
     });
     seeded.push({
       sessionId: session.id, workOrderNumber: wo.number, customer: customer.name, unit: { equipmentKind, make, model }, techId: tech.user.id, techName: techNames[i % 3]!,
       flow: { flowId: flow.id, title: flow.title, version: 1 }, findingStepId: finding?.id ?? null, findingStepTitle: finding?.title ?? null,
-      status, reviewState, startedAt: startedAt.toISOString(), completedAt: completedAt?.toISOString() ?? null, flagCount,
+      status, reviewState, startedAt: startedAt.toISOString(), completedAt: completedAt?.toISOString() ?? null,
+      // Every open session here began months ago, past the 24-hour limit: it carries its open_too_long flag.
+      flagCount: status === "open" ? storedFlags + 1 : storedFlags,
     });
   }
 }, 120_000);
@@ -123,6 +126,17 @@ describe("GET /api/review/sessions", () => {
   it("checks the seed is varied enough for the comparisons to mean something", () => {
     for (const q of combinations.slice(2)) expect(bruteForce(q).total, JSON.stringify(q)).toBeGreaterThan(0);
     expect(bruteForce({ findingStepId: seeded.find((r) => r.findingStepId)!.findingStepId! }).total).toBeGreaterThan(1);
+  });
+
+  it("counts an open session's open_too_long flag only once it is past the 24-hour limit", async () => {
+    const open = seeded.filter((r) => r.status === "open");
+    const latest = open.reduce((a, b) => (a.startedAt > b.startedAt ? a : b));
+    const q = reviewQueueQuerySchema.parse({ flagged: "true", pageSize: "100" });
+    // An hour after the latest open session began, it is not flagged yet; every other open one is older by a day or more.
+    const early = await reviewQueue(t.ctx, lead.user, q, new Date(Date.parse(latest.startedAt) + 3_600_000));
+    expect(early.rows.map((r) => r.sessionId)).not.toContain(latest.sessionId);
+    const late = await reviewQueue(t.ctx, lead.user, q, new Date(Date.parse(latest.startedAt) + 25 * 3_600_000));
+    expect(late.rows.find((r) => r.sessionId === latest.sessionId)?.flagCount).toBe(1);
   });
 
   it("filters by the finding step and by tech", async () => {
