@@ -137,7 +137,7 @@ for (const [orientation, viewport] of Object.entries(viewports)) {
         await seen(page.getByRole("button", { name: "Publish…" }), "the draft editor again");
 
         await page.getByRole("button", { name: "Publish…" }).click();
-        const dialog = page.getByRole("dialog", { name: "Publish this draft" });
+        const dialog = page.getByRole("dialog", { name: "Publish this draft as version 2", exact: true });
         await dialog.getByRole("textbox", { name: "What changed in this version" }).fill(note);
         await shot("publish");
         await dialog.getByRole("button", { name: "Publish", exact: true }).click();

@@ -28,7 +28,7 @@ describe("publishing the draft", () => {
     expect(publish).not.toHaveAccessibleDescription();
 
     await user.click(publish);
-    const dialog = screen.getByRole("dialog", { name: "Publish this draft" });
+    const dialog = screen.getByRole("dialog", { name: "Publish this draft as version 3" });
     await user.click(within(dialog).getByRole("button", { name: "Publish" }));
     const note = within(dialog).getByRole("textbox", { name: /What changed in this version/ });
     expect(await within(dialog).findByText("Say what changed in this version.")).toBeInTheDocument();
@@ -59,7 +59,7 @@ describe("publishing the draft", () => {
     await editorOpened();
     const user = userEvent.setup();
     await user.click(screen.getByRole("button", { name: "Publish…" }));
-    const dialog = screen.getByRole("dialog", { name: "Publish this draft" });
+    const dialog = screen.getByRole("dialog", { name: "Publish this draft as version 3" });
     await user.type(within(dialog).getByRole("textbox", { name: /What changed/ }), "Coil test");
     await user.click(within(dialog).getByRole("button", { name: "Publish" }));
 

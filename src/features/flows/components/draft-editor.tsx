@@ -163,7 +163,7 @@ export function DraftEditor({ detail, draft, onPublished, renderGraph, renderBan
 
   return (
     <div className="flex flex-col gap-5">
-      <DraftToolbar flowId={detail.id} editor={editor} errorCount={problems.filter((p) => p.severity === "error").length} onUndo={undo} onRedo={redo} onPublished={onPublished} />
+      <DraftToolbar flowId={detail.id} nextVersion={Math.max(0, ...detail.versions.map((v) => v.number)) + 1} editor={editor} errorCount={problems.filter((p) => p.severity === "error").length} onUndo={undo} onRedo={redo} onPublished={onPublished} />
       {restoredShown && (
         <div role="status" className="flex flex-wrap items-center justify-between gap-3 rounded-lg border-2 border-accent bg-accent-soft px-4 py-3">
           <p>

@@ -10,6 +10,8 @@ import { SaveStatusLine } from "./save-status.tsx";
 
 interface DraftToolbarProps {
   flowId: string;
+  /** The number publishing would give the draft. */
+  nextVersion: number;
   editor: DraftEditor;
   errorCount: number;
   onUndo: () => void;
@@ -18,7 +20,7 @@ interface DraftToolbarProps {
 }
 
 /** Saving, undo and redo, publishing, export and discarding: what acts on the whole draft. */
-export function DraftToolbar({ flowId, editor, errorCount, onUndo, onRedo, onPublished }: DraftToolbarProps) {
+export function DraftToolbar({ flowId, nextVersion, editor, errorCount, onUndo, onRedo, onPublished }: DraftToolbarProps) {
   const [publishing, setPublishing] = useState(false);
   const [discarding, setDiscarding] = useState(false);
   const discard = useDiscardDraft(flowId);
@@ -78,6 +80,7 @@ export function DraftToolbar({ flowId, editor, errorCount, onUndo, onRedo, onPub
       {publishing && (
         <PublishDialog
           flowId={flowId}
+          nextVersion={nextVersion}
           flush={editor.flush}
           onClose={() => setPublishing(false)}
           onPublished={(version) => {

@@ -16,13 +16,15 @@ const resolver = zodResolver(noteSchema, editorParse);
 
 interface PublishDialogProps {
   flowId: string;
+  /** The number the published version will have. */
+  nextVersion: number;
   /** Saves what is unsaved first; null when the draft could not be saved. */
   flush: () => Promise<number | null>;
   onClose: () => void;
   onPublished: (version: number) => void;
 }
 
-export function PublishDialog({ flowId, flush, onClose, onPublished }: PublishDialogProps) {
+export function PublishDialog({ flowId, nextVersion, flush, onClose, onPublished }: PublishDialogProps) {
   const publish = usePublishFlow(flowId);
   const [notSaved, setNotSaved] = useState(false);
   const { register, handleSubmit, formState } = useForm<z.input<typeof noteSchema>, unknown, z.output<typeof noteSchema>>({ resolver, defaultValues: { note: "" } });
@@ -45,8 +47,8 @@ export function PublishDialog({ flowId, flush, onClose, onPublished }: PublishDi
 
   const refused = publishProblemsOf(publish.error);
   return (
-    <Dialog title="Publish this draft" onClose={onClose}>
-      <p className="max-w-[65ch]">Publishing makes the draft the flow's next version: new bench sessions start on it. Sessions already running keep the version they began on.</p>
+    <Dialog title={`Publish this draft as version ${nextVersion}`} onClose={onClose}>
+      <p className="max-w-[65ch]">Publishing makes the draft version {nextVersion} of the flow: new bench sessions start on it. Sessions already running keep the version they began on.</p>
       <form noValidate onSubmit={onSubmit} data-native-undo className="flex flex-col gap-5">
         {notSaved && <FormProblem title="Not published: the draft could not be saved first.">Your changes are kept; see the save status, then try again.</FormProblem>}
         {publish.error && (
