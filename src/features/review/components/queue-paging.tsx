@@ -4,7 +4,7 @@ import { pageSizes } from "../lib/queue-params.ts";
 import type { QueueTable } from "../lib/use-queue-table.ts";
 
 /** Where the page sits in the whole list, and the way to the pages either side. */
-export function QueuePaging({ table, total, pageSizeError }: { table: QueueTable; total: number; pageSizeError?: string }) {
+export function QueuePaging({ table, total }: { table: QueueTable; total: number }) {
   const { pageIndex, pageSize } = table.state.pagination;
   const pages = table.getPageCount();
   const first = pageIndex * pageSize + 1;
@@ -26,7 +26,6 @@ export function QueuePaging({ table, total, pageSizeError }: { table: QueueTable
           id="queue-page-size"
           label="Rows a page"
           value={String(pageSize)}
-          error={pageSizeError}
           onChange={(event) => table.setPageSize(Number(event.currentTarget.value))}
           className="w-40"
         >

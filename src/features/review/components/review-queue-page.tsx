@@ -24,7 +24,7 @@ export function ReviewQueuePage() {
   const refusal = queue.isError ? queueRefusalOf(queue.error) : null;
   const errors = refusal?.byParam ?? {};
   const extra = extraFilterCount(view.filters) - (view.filters.search ? 1 : 0);
-  const [showFilters, setShowFilters] = useState(extra > 0 || Object.keys(errors).length > 0);
+  const [showFilters, setShowFilters] = useState(extra > 0);
   const waitingOnly = view.filters.reviewState === "waiting" && extraFilterCount(view.filters) === 0;
   const clear = () => setParams(withoutFilters(params));
   return (
@@ -66,7 +66,7 @@ export function ReviewQueuePage() {
       ) : (
         <QueueTable table={table} busy={queue.isPlaceholderData} />
       )}
-      {queue.data && !refusal && queue.data.total > 0 && <QueuePaging table={table} total={queue.data.total} pageSizeError={errors.pageSize} />}
+      {queue.data && !refusal && queue.data.total > 0 && <QueuePaging table={table} total={queue.data.total} />}
     </div>
   );
 }

@@ -1,12 +1,12 @@
 import { useCallback, useMemo, useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { Link } from "react-router";
-import { compileFlow, type CompiledFlow } from "../../../../shared/flow/compile.ts";
 import type { UnitSystem } from "../../../../shared/equipment.ts";
 import { sessionTimeline } from "../../../../shared/review/timeline.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { buttonClasses } from "../../../components/ui/button.tsx";
 import { isApiRequestError } from "../../../lib/api-client.ts";
+import { compiledVersionOf } from "../../../lib/compiled-version.ts";
 import { reviewSessionQueryOptions } from "../api/get-review-session.ts";
 import { sessionFlagsQueryOptions } from "../api/get-session-flags.ts";
 import { FlagsPanel } from "./flags-panel.tsx";
@@ -14,14 +14,6 @@ import { PhotoViewer, type ViewerPhoto } from "./photo-viewer.tsx";
 import { SessionFacts } from "./session-facts.tsx";
 import { SignOffPanel } from "./sign-off-panel.tsx";
 import { entryAnchor, TimelineEntryView } from "./timeline-entry.tsx";
-
-// A published version never changes: compile it once, however often its sessions are opened.
-const compiledVersions = new Map<string, CompiledFlow>();
-function compiledFor(detail: SessionDetail): CompiledFlow {
-  let compiled = compiledVersions.get(detail.flow.versionId);
-  if (!compiled) compiledVersions.set(detail.flow.versionId, (compiled = compileFlow(detail.definition)));
-  return compiled;
-}
 
 interface SessionReviewPageProps {
   sessionId: string;
@@ -54,7 +46,7 @@ export function SessionReviewPage({ sessionId, unitSystem, queuePath }: SessionR
 function SessionReview({ detail, unitSystem, back }: { detail: SessionDetail; unitSystem: UnitSystem; back: React.ReactNode }) {
   const flags = useQuery(sessionFlagsQueryOptions(detail.id));
   const entries = useMemo(
-    () => sessionTimeline({ flow: compiledFor(detail), input: detail.input, events: detail.events, startedAt: detail.startedAt, status: detail.status, abandonReason: detail.abandonReason }, unitSystem),
+    () => sessionTimeline({ flow: compiledVersionOf(detail), input: detail.input, events: detail.events, startedAt: detail.startedAt, status: detail.status, abandonReason: detail.abandonReason }, unitSystem),
     [detail, unitSystem],
   );
   const photos: ViewerPhoto[] = useMemo(() => entries.flatMap((e) => (e.kind === "step" || e.kind === "finding" ? e.photos.map((p) => ({ attachmentId: p.attachmentId, at: p.at, stepTitle: e.title })) : [])), [entries]);
