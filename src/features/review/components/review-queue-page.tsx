@@ -23,8 +23,9 @@ export function ReviewQueuePage() {
   const table = useQueueTable(address, queue.data?.rows, queue.data?.total);
   const refusal = queue.isError ? queueRefusalOf(queue.error) : null;
   const errors = refusal?.byParam ?? {};
-  const extra = extraFilterCount(view.filters) - (view.filters.search ? 1 : 0);
-  const [showFilters, setShowFilters] = useState(extra > 0);
+  // The filters behind the button that are on (the search has its own box).
+  const panelFilters = extraFilterCount(view.filters) - (view.filters.search ? 1 : 0);
+  const [showFilters, setShowFilters] = useState(panelFilters > 0);
   const waitingOnly = view.filters.reviewState === "waiting" && extraFilterCount(view.filters) === 0;
   const clear = () => setParams(withoutFilters(params));
   return (
@@ -35,11 +36,11 @@ export function ReviewQueuePage() {
       </div>
       <Presets reviewState={view.filters.reviewState} waitingOnly={waitingOnly} />
       <div role="search" aria-label="Sessions" className="flex flex-col gap-4">
-        <div className="grid gap-4 landscape:grid-cols-[1fr_auto] landscape:items-end portrait:grid-cols-[1fr_auto] portrait:items-end">
+        <div className="grid grid-cols-[1fr_auto] items-end gap-4">
           <QueueSearch value={view.filters.search ?? ""} error={errors.search} onSearch={(text) => table.setGlobalFilter(text)} />
           <button type="button" aria-expanded={showFilters} aria-controls="queue-filters" className="inline-flex min-h-14 items-center gap-2 rounded-lg border-2 border-line-strong bg-raised px-5 font-semibold" onClick={() => setShowFilters(!showFilters)}>
             {showFilters ? "Hide filters" : "Filters"}
-            {extra > 0 && <span className="rounded-full bg-ink px-2 text-base text-surface tabular-figures">{extra} on</span>}
+            {panelFilters > 0 && <span className="rounded-full bg-ink px-2 text-base text-surface tabular-figures">{panelFilters} on</span>}
           </button>
         </div>
         {showFilters && (
