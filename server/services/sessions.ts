@@ -1,8 +1,9 @@
 import { and, asc, eq } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
 import { v7 as uuidv7 } from "uuid";
 import type { AppContext } from "../context.ts";
 import type { Database } from "../db/client.ts";
-import { diagnosticSessions, flows, flowVersions, sessionEvents, units, workOrders, type DiagnosticSessionRow, type SessionEventRow } from "../db/schema.ts";
+import { customers, diagnosticSessions, flows, flowVersions, sessionEvents, units, users, workOrders, type DiagnosticSessionRow, type SessionEventRow } from "../db/schema.ts";
 import { can } from "../auth/policies.ts";
 import { conflict, isUniqueViolation, notFound, unprocessable } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
@@ -15,6 +16,7 @@ import type { SessionDetail, StoredEvent } from "../../shared/schemas/sessions.t
 import type { PublicUser } from "../../shared/schemas/users.ts";
 
 type Tx = Pick<Database, "select">;
+const reviewers = alias(users, "reviewers");
 
 const hidden = () => notFound("There is no such session.");
 
@@ -82,28 +84,40 @@ export async function getSessionDetail(ctx: Pick<AppContext, "db">, user: Public
   const [meta] = await ctx.db
     .select({
       number: workOrders.number,
+      customer: customers.name,
       unit: { equipmentKind: units.equipmentKind, make: units.make, model: units.model },
+      techName: users.name,
+      reviewerName: reviewers.name,
       flowId: flows.id,
       title: flows.title,
       version: flowVersions.number,
       definition: flowVersions.definition,
     })
-    .from(workOrders)
+    .from(diagnosticSessions)
+    .innerJoin(workOrders, eq(workOrders.id, diagnosticSessions.workOrderId))
+    .innerJoin(customers, eq(customers.id, workOrders.customerId))
     .innerJoin(units, eq(units.id, workOrders.unitId))
-    .innerJoin(flowVersions, eq(flowVersions.id, session.flowVersionId))
+    .innerJoin(users, eq(users.id, diagnosticSessions.techId))
+    .leftJoin(reviewers, eq(reviewers.id, diagnosticSessions.reviewerId))
+    .innerJoin(flowVersions, eq(flowVersions.id, diagnosticSessions.flowVersionId))
     .innerJoin(flows, eq(flows.id, flowVersions.flowId))
-    .where(eq(workOrders.id, session.workOrderId));
+    .where(eq(diagnosticSessions.id, id));
   const events = await sessionEventsOf(ctx.db, id);
   const result = replaySession(await compiledVersion(ctx.db, session.flowVersionId), session.input, events.map((e) => e.payload));
   return {
     id,
     workOrderId: session.workOrderId,
     workOrderNumber: meta!.number,
+    customer: meta!.customer,
     unit: meta!.unit,
     techId: session.techId,
+    techName: meta!.techName,
     status: session.status,
+    abandonReason: session.abandonReason,
     reviewState: session.reviewState,
     reviewComment: session.reviewComment,
+    reviewerName: meta!.reviewerName,
+    reviewedAt: session.reviewedAt?.toISOString() ?? null,
     flow: { flowId: meta!.flowId, versionId: session.flowVersionId, version: meta!.version, title: meta!.title },
     definition: meta!.definition,
     input: { profile: { cycle: session.input.profile.cycle, compressionRelease: session.input.profile.compressionRelease, displacementCc: session.input.profile.displacementCc }, altitudeM: session.input.altitudeM },

@@ -108,6 +108,15 @@ export function preferredUnit(quantity: Quantity, system: "imperial" | "metric")
   return system === "imperial" ? (imperial[quantity] ?? canonicalUnit[quantity]) : canonicalUnit[quantity];
 }
 
+const imperialUnits: ReadonlySet<Unit> = new Set<Unit>(["psi", "in", "fl_oz_us", "fl_oz_imp", "gal_us", "degF", "lbf_in", "lbf_ft"]);
+
+/** The system a unit belongs to, or null for one both systems use (Ω, V, rpm, s). */
+export function systemOf(unit: Unit): "imperial" | "metric" | null {
+  if (imperialUnits.has(unit)) return "imperial";
+  const quantity = quantityOf(unit);
+  return preferredUnit(quantity, "imperial") === preferredUnit(quantity, "metric") ? null : "metric";
+}
+
 export interface ReadingLimit {
   /** Bounds in the quantity's canonical unit, both inclusive. */
   min: number;

@@ -70,3 +70,14 @@ export const sessionFlagSchema = z.object({ code: z.enum(flagCodes), stepId: z.s
 /** GET /api/review/sessions/:id/flags — stored at completion; worked out now for a session still open. */
 export const sessionFlagsResponseSchema = z.object({ sessionId: z.string(), computedAt: z.string(), flags: z.array(sessionFlagSchema) });
 export type SessionFlagsResponse = z.infer<typeof sessionFlagsResponseSchema>;
+
+/** GET /api/review/options takes no parameters. */
+export const reviewOptionsQuerySchema = z.strictObject({}, { error: (issue) => (issue.code === "unrecognized_keys" ? `The filter options take no parameters: ${issue.keys.join(", ")}.` : undefined) });
+
+/** GET /api/review/options — what the queue's filters offer, from the sessions the caller may list. */
+export const reviewOptionsResponseSchema = z.object({
+  techs: z.array(z.object({ id: z.string(), name: z.string() })),
+  /** Each flow with the findings its versions can end at, newest version's titles first. */
+  flows: z.array(z.object({ flowId: z.string(), title: z.string(), findings: z.array(z.object({ stepId: z.string(), title: z.string() })) })),
+});
+export type ReviewOptionsResponse = z.infer<typeof reviewOptionsResponseSchema>;

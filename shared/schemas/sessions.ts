@@ -33,12 +33,19 @@ export const sessionDetailSchema = z.object({
   id: z.string(),
   workOrderId: z.string(),
   workOrderNumber: z.number().int(),
+  customer: z.string(),
   /** The unit on the bench, so the screen always says which one the check is for. */
   unit: z.object({ equipmentKind: z.enum(equipmentKinds), make: z.string(), model: z.string() }),
   techId: z.string(),
+  techName: z.string(),
   status: z.enum(sessionStatuses),
+  /** Why the tech stopped, for an abandoned session. */
+  abandonReason: z.string().nullable(),
   reviewState: z.enum(reviewStates),
   reviewComment: z.string().nullable(),
+  /** Who signed the session off or sent it back, and when; null until then. */
+  reviewerName: z.string().nullable(),
+  reviewedAt: z.string().nullable(),
   flow: z.object({ flowId: z.string(), versionId: z.string(), version: z.number().int(), title: z.string() }),
   /** The pinned version's definition with its sections inlined, ready for compileFlow. */
   definition: z.unknown(),

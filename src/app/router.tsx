@@ -1,6 +1,7 @@
-import { createBrowserRouter, data, type LoaderFunctionArgs, type RouteObject } from "react-router";
+import { createBrowserRouter, data, redirect, type LoaderFunctionArgs, type RouteObject } from "react-router";
 import type { QueryClient } from "@tanstack/react-query";
 import { workOrderQueryOptions } from "../features/work-orders/api/get-work-order.ts";
+import { waitingSearch } from "../features/review/lib/queue-views.ts";
 import { isApiRequestError } from "../lib/api-client.ts";
 import { areaIds, areas, type AreaId } from "./areas.ts";
 import { areaLoader, homeLoader, rootLoader, signedInLoader, signInLoader } from "./loaders.ts";
@@ -9,12 +10,12 @@ import { AreaProblem } from "./routes/route-problem.tsx";
 import { RootProblem, StartingUp } from "./routes/root-problem.tsx";
 
 type AreaModule = () => Promise<{ Component: () => React.JSX.Element }>;
-type AreaWithChildren = "bench" | "work-orders" | "flows";
-const hasChildren = (id: AreaId): id is AreaWithChildren => id === "bench" || id === "work-orders" || id === "flows";
+const areasWithChildren = ["bench", "work-orders", "flows", "review"] as const;
+type AreaWithChildren = (typeof areasWithChildren)[number];
+const hasChildren = (id: AreaId): id is AreaWithChildren => (areasWithChildren as readonly AreaId[]).includes(id);
 
 // One chunk per area, so the bench never downloads the flow editor or the insight charts.
 const areaModules: Record<Exclude<AreaId, AreaWithChildren>, AreaModule> = {
-  review: () => import("./routes/review.tsx"),
   insight: () => import("./routes/insight.tsx"),
   settings: () => import("./routes/settings.tsx"),
   people: () => import("./routes/people.tsx"),
@@ -33,11 +34,18 @@ function workOrderLoader(queryClient: QueryClient) {
   };
 }
 
+/** The bare /review is the shop lead's home: the sessions waiting for sign-off. */
+function reviewQueueLoader({ request }: LoaderFunctionArgs) {
+  if (new URL(request.url).search === "") throw redirect(`/review${waitingSearch}`);
+  return null;
+}
+
 // Areas with more than one screen load each screen on its own.
 function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteObject[]> {
   const bench = () => import("./routes/bench.tsx");
   const workOrders = () => import("./routes/work-orders.tsx");
   const flows = () => import("./routes/flows.tsx");
+  const review = () => import("./routes/review.tsx");
   return {
     bench: [
       { index: true, lazy: () => bench().then((module) => ({ Component: module.BenchHomeRoute })) },
@@ -57,6 +65,10 @@ function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteO
       { path: ":flowId", lazy: () => flows().then((module) => ({ Component: module.FlowEditorRoute })) },
       { path: ":flowId/history", lazy: () => flows().then((module) => ({ Component: module.FlowHistoryRoute })) },
       { path: ":flowId/simulate", lazy: () => flows().then((module) => ({ Component: module.FlowSimulateRoute })) },
+    ],
+    review: [
+      { index: true, loader: reviewQueueLoader, lazy: () => review().then((module) => ({ Component: module.ReviewQueueRoute })) },
+      { path: "sessions/:sessionId", lazy: () => review().then((module) => ({ Component: module.ReviewSessionRoute })) },
     ],
   };
 }

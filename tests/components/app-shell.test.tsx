@@ -8,12 +8,17 @@ import { answers } from "./work-orders/fakes.ts";
 const navigationByRole: [Role, string, string[], string][] = [
   ["apprentice", "/bench", ["Bench", "Work orders"], "Check in a unit"],
   ["senior_tech", "/flows", ["Flows", "Bench", "Work orders"], "No flows yet. Make one, or import a flow file."],
-  ["shop_lead", "/review", ["Review", "Flows", "Shop insight", "Work orders", "Shop settings", "People"], "Coming in a later release"],
+  ["shop_lead", "/review", ["Review", "Flows", "Shop insight", "Work orders", "Shop settings", "People"], "Nothing is waiting for sign-off."],
 ];
 
 describe("app shell", () => {
   it.each(navigationByRole)("shows the %s role only its own areas and opens the first one", async (role, home, labels, homeShows) => {
-    stubApi(meAnswers(signedInAs(role)), answers("GET", "/api/flows", () => json({ flows: [] })));
+    stubApi(
+      meAnswers(signedInAs(role)),
+      answers("GET", "/api/flows", () => json({ flows: [] })),
+      answers("GET", "/api/review/sessions", () => json({ rows: [], total: 0, page: 1, pageSize: 25 })),
+      answers("GET", "/api/review/options", () => json({ techs: [], flows: [] })),
+    );
     const { router } = renderApp("/");
 
     // The first lazy route import in a run can take over a second to transform.

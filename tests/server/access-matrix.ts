@@ -66,6 +66,8 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/sessions/:id/review", path: (f) => `/api/sessions/${f.foreignSessionId}/review`, body: { decision: "approve" }, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 409 } },
   { method: "GET", route: "/api/review/sessions", expect: signedIn(200) },
   { method: "GET", route: "/api/review/sessions", path: "/api/review/sessions?reviewState=pending", expect: signedIn(400) },
+  { method: "GET", route: "/api/review/options", expect: signedIn(200) },
+  { method: "GET", route: "/api/review/options", path: "/api/review/options?techId=x", expect: signedIn(400) },
   { method: "GET", route: "/api/review/sessions/:id/flags", path: (f, who) => `/api/review/sessions/${own(f, who)}/flags`, expect: signedIn(200) },
   { method: "GET", route: "/api/review/sessions/:id/flags", path: (f) => `/api/review/sessions/${f.foreignSessionId}/flags`, expect: { anonymous: 401, apprentice: 404, senior_tech: 404, shop_lead: 200 } },
   { method: "POST", route: "/api/sessions/:id/photos", path: (f, who) => `/api/sessions/${own(f, who)}/photos`, expect: signedIn(400) },

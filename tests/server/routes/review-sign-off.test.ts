@@ -44,8 +44,9 @@ describe("POST /api/sessions/:id/review", () => {
     const session = await completedByTech();
     const res = await lead.agent.post(`/api/sessions/${session.id}/review`).send({ decision: "approve", comment: "" });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: session.id, status: "completed", reviewState: "approved", reviewComment: null });
+    expect(res.body).toMatchObject({ id: session.id, status: "completed", reviewState: "approved", reviewComment: null, reviewerName: lead.user.name, techName: tech.user.name });
     const row = await rowOf(session.id);
+    expect(res.body.reviewedAt).toBe(row.reviewedAt!.toISOString());
     expect(row).toMatchObject({ reviewState: "approved", reviewerId: lead.user.id });
     expect(row.reviewedAt).toBeInstanceOf(Date);
     const audit = await t.ctx.db.select().from(auditLog).where(and(eq(auditLog.recordId, session.id), eq(auditLog.action, "session.approved")));

@@ -6,7 +6,7 @@ import { buildWorkOrder } from "../../factories/work-orders.ts";
 import { buildSession, HANDHELD_2_STROKE } from "../../factories/sessions.ts";
 import { buildAttachment } from "../../factories/attachments.ts";
 import { appendRequests, gatedEvents, handheldToFinding, type Move } from "../../factories/session-events.ts";
-import { auditLog, diagnosticSessions, sessionEvents, workOrders } from "../../../server/db/schema.ts";
+import { auditLog, customers, diagnosticSessions, sessionEvents, workOrders } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows } from "../../../server/services/flows.ts";
 import type { CompiledFlow } from "../../../shared/flow/compile.ts";
 import type { DiagnosticSessionRow } from "../../../server/db/schema.ts";
@@ -52,6 +52,8 @@ describe("POST /api/work-orders/:id/sessions", () => {
     const res = await tech.agent.post(`/api/work-orders/${wo.id}/sessions`).send({ flowId: HANDHELD_2_STROKE });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ workOrderId: wo.id, workOrderNumber: wo.number, techId: tech.user.id, status: "open", reviewState: "not_submitted", events: [], findingStepId: null });
+    const [customer] = await t.ctx.db.select().from(customers).where(eq(customers.id, wo.customerId));
+    expect(res.body).toMatchObject({ customer: customer!.name, techName: tech.user.name, abandonReason: null, reviewerName: null, reviewedAt: null });
     expect(res.body.flow).toMatchObject({ flowId: HANDHELD_2_STROKE, version: 1 });
     expect(res.body.input).toEqual({ profile: { cycle: 2, compressionRelease: "no", displacementCc: 25 }, altitudeM: 0 });
     expect(res.body.currentStepId).toBe("prepare/protect");
@@ -181,7 +183,7 @@ describe("completing and abandoning", () => {
     expect((await tech.agent.post(`/api/sessions/${session.id}/abandon`).send({ reason: "" })).status).toBe(400);
     const res = await tech.agent.post(`/api/sessions/${session.id}/abandon`).send({ reason: "Customer took the unit back" });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ status: "abandoned" });
+    expect(res.body).toMatchObject({ status: "abandoned", abandonReason: "Customer took the unit back" });
     expect(res.body.events).toHaveLength(1);
     const [row] = await t.ctx.db.select().from(diagnosticSessions).where(eq(diagnosticSessions.id, session.id));
     expect(row!.abandonReason).toBe("Customer took the unit back");

@@ -8,6 +8,7 @@ import {
   preferredUnit,
   quantities,
   quantityOf,
+  systemOf,
   unitLabel,
   unitsByQuantity,
   UnitError,
@@ -126,6 +127,15 @@ describe("unit metadata", () => {
     expect(preferredUnit("temperature", "imperial")).toBe("degF");
     expect(preferredUnit("speed", "imperial")).toBe("rpm");
     expect(preferredUnit("length", "metric")).toBe("mm");
+  });
+
+  it("tells which system a unit belongs to, and none for the units both share", () => {
+    // From memory: psi, inches, fluid ounces, gallons, °F and pound-force torque are US customary/imperial; kPa, bar, mm, mL, L, °C and N·m metric.
+    const imperial: Unit[] = ["psi", "in", "fl_oz_us", "fl_oz_imp", "gal_us", "degF", "lbf_in", "lbf_ft"];
+    const metric: Unit[] = ["kPa", "bar", "mm", "mL", "L", "degC", "N_m"];
+    const shared: Unit[] = ["ohm", "kohm", "V", "kV", "rpm", "s", "min"];
+    expect([...imperial.map(systemOf), ...metric.map(systemOf), ...shared.map(systemOf)]).toEqual([...imperial.map(() => "imperial"), ...metric.map(() => "metric"), ...shared.map(() => null)]);
+    expect(new Set([...imperial, ...metric, ...shared])).toEqual(new Set(quantities.flatMap((q) => unitsByQuantity[q])));
   });
 });
 

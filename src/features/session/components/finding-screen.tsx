@@ -1,7 +1,7 @@
 import type { CompiledFlow, CompiledStep } from "../../../../shared/flow/compile.ts";
 import type { FlowContext } from "../../../../shared/flow/context.ts";
 import { unitLabel } from "../../../../shared/calc/units.ts";
-import { VerdictMark } from "./verdict-mark.tsx";
+import { VerdictMark } from "../../../components/ui/verdict-mark.tsx";
 
 type FindingStep = Extract<CompiledStep, { kind: "finding" }>;
 

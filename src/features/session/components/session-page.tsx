@@ -1,23 +1,15 @@
 import { useMemo } from "react";
 import { Link } from "react-router";
 import { useQuery } from "@tanstack/react-query";
-import { compileFlow, type CompiledFlow } from "../../../../shared/flow/compile.ts";
 import type { SessionDetail } from "../../../../shared/schemas/sessions.ts";
 import { Button, buttonClasses } from "../../../components/ui/button.tsx";
 import { FieldError } from "../../../components/ui/field-error.tsx";
+import { compiledVersionOf } from "../../../lib/compiled-version.ts";
 import { useReopenSession } from "../api/end-session.ts";
 import { sessionQueryOptions } from "../api/get-session.ts";
 import { SessionRunner } from "./session-runner.tsx";
 import { FindingSummary } from "./finding-screen.tsx";
 import { replaySession } from "../../../../shared/flow/session-log.ts";
-
-// A published version never changes: compile it once per version, however often its session is fetched again.
-const compiledVersions = new Map<string, CompiledFlow>();
-function compiledFor(detail: SessionDetail): CompiledFlow {
-  let compiled = compiledVersions.get(detail.flow.versionId);
-  if (!compiled) compiledVersions.set(detail.flow.versionId, (compiled = compileFlow(detail.definition)));
-  return compiled;
-}
 
 const closedWords: Record<SessionDetail["reviewState"], string> = {
   not_submitted: "This check is closed.",
@@ -57,7 +49,7 @@ function ReviseActions({ sessionId }: { sessionId: string }) {
 }
 
 function ClosedSession({ detail }: { detail: SessionDetail }) {
-  const compiled = compiledFor(detail);
+  const compiled = compiledVersionOf(detail);
   const replayed = useMemo(() => replaySession(compiled, detail.input, detail.events.map((e) => e.event)), [compiled, detail]);
   const step = replayed.ok ? compiled.steps[replayed.stepId] : undefined;
   return (
@@ -79,7 +71,7 @@ function ClosedSession({ detail }: { detail: SessionDetail }) {
 }
 
 function OpenSession({ detail, unitSystem }: { detail: SessionDetail; unitSystem: "imperial" | "metric" }) {
-  const compiled = compiledFor(detail);
+  const compiled = compiledVersionOf(detail);
   return (
     <div className="flex flex-col gap-4">
       {detail.reviewState === "returned" && detail.reviewComment && <LeadComment comment={detail.reviewComment} />}

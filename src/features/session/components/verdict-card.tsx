@@ -3,7 +3,7 @@ import { unitLabel } from "../../../../shared/calc/units.ts";
 import type { CompiledStep } from "../../../../shared/flow/compile.ts";
 import type { ReadingRecord } from "../../../../shared/flow/context.ts";
 import { Button } from "../../../components/ui/button.tsx";
-import { VerdictMark } from "./verdict-mark.tsx";
+import { VerdictMark } from "../../../components/ui/verdict-mark.tsx";
 
 const fmt = (n: number) => String(Number(n.toPrecision(4)));
 

@@ -1,4 +1,4 @@
-import type { Verdict } from "../../../../shared/flow/schema.ts";
+import type { Verdict } from "../../../shared/flow/schema.ts";
 
 export const verdictWords: Record<Verdict, string> = {
   good: "Good",

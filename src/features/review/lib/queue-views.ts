@@ -1,0 +1,6 @@
+// The queue's two named views, kept free of imports: the router's redirect reads them on every start.
+
+/** The shop lead's home: completed checks waiting for sign-off. */
+export const waitingSearch = "?reviewState=waiting";
+/** Every session; `page` keeps the address from being the bare home. */
+export const allSessionsSearch = "?page=1";
