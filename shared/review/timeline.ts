@@ -72,6 +72,8 @@ export interface FindingEntry extends Annotations {
   title: string;
   certainty: "confirmed" | "likely";
   reachedAt: string;
+  /** When the tech went back from this finding (a returned session being revised); null while it stands. */
+  takenBackAt: string | null;
 }
 
 export interface AbandonedEntry {
@@ -144,7 +146,7 @@ export function sessionTimeline(session: TimelineSession, unitSystem: UnitSystem
     const key = `${entries.length}-${stepId}`;
     const entry: StepEntry | FindingEntry =
       step.kind === "finding"
-        ? { kind: "finding", key, stepId, title: step.title, certainty: step.certainty, reachedAt: at, photos: [], notes: [], cautions: [] }
+        ? { kind: "finding", key, stepId, title: step.title, certainty: step.certainty, reachedAt: at, takenBackAt: null, photos: [], notes: [], cautions: [] }
         : { kind: "step", key, stepId, title: step.title, stepKind: step.kind, reachedAt: at, answer: null, answeredAt: null, seconds: null, changedFrom: null, undone: false, left: null, photos: [], notes: [], cautions: [] };
     entries.push(entry);
     return entry;
@@ -166,8 +168,14 @@ export function sessionTimeline(session: TimelineSession, unitSystem: UnitSystem
       if (event.type === "photo.attach") current.photos.push({ at, attachmentId: event.attachmentId });
       else if (event.type === "note.add") current.notes.push({ at, text: event.text });
       else if (event.type === "caution.acknowledge") current.cautions.push({ at, signal: event.signal });
-      // The replay stops before any step event after a finding.
-      else if (current.kind === "step") {
+      // At a finding only going back is taken (the replay stops before anything else).
+      else if (current.kind === "finding") {
+        actor.send(event);
+        current.takenBackAt = at;
+        const returnedTo = standing.pop();
+        if (returnedTo) takeBack(returnedTo);
+        here = visit(currentStepId(actor.getSnapshot().context), at);
+      } else {
         actor.send(event);
         const context = actor.getSnapshot().context;
         if (event.type === "step.back") {

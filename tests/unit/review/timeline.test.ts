@@ -107,6 +107,19 @@ describe("sessionTimeline", () => {
     expect(gap!.changedFrom).toBeNull();
   });
 
+  it("shows a finding the tech went back from, with the reading taken again and the new finding", () => {
+    // A returned session revised: back from the finding, compression taken again lower.
+    const log: [number, SessionEventBody][] = [...withRevision, [500, { type: "step.back" }], [560, { type: "step.record", stepId: "gauge", value: 60, unit: "psi" }]];
+    const entries = sessionTimeline(session(log), "imperial");
+    expect(ids(entries)).toEqual(["step:guard", "step:inspect", "step:gap", "step:gauge", "step:gap", "step:gauge", "finding:healthy", "step:gauge", "finding:worn"]);
+    expect(entries[6]).toMatchObject({ kind: "finding", takenBackAt: at(500) });
+    expect(entries[8]).toMatchObject({ kind: "finding", takenBackAt: null, reachedAt: at(560) });
+    const gauges = steps(entries).filter((e) => e.stepId === "gauge");
+    expect(gauges[1]).toMatchObject({ undone: true, answer: { kind: "reading", entered: { value: 120, unit: "psi" } } });
+    // 560 s − 500 s (the back from the finding).
+    expect(gauges[2]).toMatchObject({ undone: false, seconds: 60, changedFrom: { kind: "reading", entered: { value: 120, unit: "psi" } } });
+  });
+
   it("shows no change when the tech goes back and gives the same answer again", () => {
     const log = withRevision.map(([s, e]): [number, SessionEventBody] => (s === 280 ? [s, { type: "step.record", stepId: "gap", value: 0.76, unit: "mm" }] : [s, e]));
     const [, , gap, , gapAgain] = steps(sessionTimeline(session(log), "imperial"));

@@ -63,6 +63,7 @@ export function TimelineEntryView({ entry, photoNumber, photoCount, onOpenPhoto,
           <p>
             {entry.certainty === "confirmed" ? "Confirmed" : "Likely"}, reached at {time(entry.reachedAt)}
           </p>
+          {entry.takenBackAt && <p className="font-semibold">Taken back: the tech went back from this finding at {time(entry.takenBackAt)}.</p>}
           <Extras annotations={entry} photoNumber={photoNumber} photoCount={photoCount} onOpenPhoto={onOpenPhoto} />
         </li>
       );
