@@ -159,6 +159,16 @@ function sessionRow(rows: HistoryRows, spec: SessionSpec, walk: Walk, id: string
     input,
     startedAt: date(spec.startedAt),
     currentStepId: walk.events[walk.events.length - 1]?.standing ?? guide.flow.start,
+    // Every column written out, so the rows can be copied in as they are.
+    abandonReason: null,
+    findingStepId: null,
+    reviewState: "not_submitted" as const,
+    reviewerId: null,
+    reviewComment: null,
+    reviewedAt: null,
+    flags: null,
+    flagCount: 0,
+    completedAt: null,
   };
   if (spec.outcome === "open") return { ...base, status: "open" as const };
   if (spec.outcome === "abandoned") return { ...base, status: "abandoned" as const, abandonReason: rng.pick(abandonReasons) };
