@@ -5,7 +5,7 @@ import reactHooks from "eslint-plugin-react-hooks";
 const features = ["auth", "bench", "work-orders", "session", "flows", "review", "insight", "estimates", "settings", "users", "calculators", "home"];
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", "data/**", "artifacts/**", "coverage/**", "drizzle/**"] },
+  { ignores: ["dist/**", "node_modules/**", "data/**", "data-load/**", "artifacts/**", "coverage/**", "drizzle/**"] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

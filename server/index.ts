@@ -16,6 +16,8 @@ import { eq } from "drizzle-orm";
 import { users } from "./db/schema.ts";
 import { BuiltInFlowError, loadBuiltInFlows } from "./flows/builtin.ts";
 import { installBuiltInFlows } from "./services/flows.ts";
+import { seedHistory } from "./db/seed/history.ts";
+import { storageFor } from "./storage/storage.ts";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 
@@ -64,12 +66,15 @@ async function main() {
     throw error;
   }
   const { handle } = store;
-  if (env.SEED_DEMO && (await isEmpty(handle.db))) {
+  const firstStart = env.SEED_DEMO && (await isEmpty(handle.db));
+  if (firstStart) {
     await seedDemo(handle.db);
     logger.info("seeded the demo shop");
   }
   const installed = await installBuiltInFlows(handle.db, builtInFlows);
   if (installed.length > 0) logger.info({ flows: installed }, "installed built-in flows");
+  // The history runs on the built-in flows, so it comes after them.
+  if (firstStart) logger.info(await seedHistory(handle.db, storageFor(env)), "added the demo shop's history");
   const ctx = createContext({ db: handle.db, env, logger, health: healthProbe(handle) });
   const clientDir = [path.resolve(here, "..", "client"), path.resolve(here, "..", "dist", "client")].find((d) => existsSync(path.join(d, "index.html")));
   const app = createApp(ctx, { clientDir: clientDir ?? null, clientMiddleware: await devClient(env) });

@@ -33,6 +33,8 @@ const policies: Record<string, Policy> = {
   "session.flags": (user, record) => record?.ownerId === user.id || user.role === "shop_lead",
   // The whole review queue; a tech's own list is narrowed to their sessions by the service.
   "review.list_all": (user) => user.role === "shop_lead",
+  // The shop's figures over a date range: the shop lead's alone.
+  "insight.read": (user) => user.role === "shop_lead",
   // Everyone reads flows; apprentices only published, unretired ones (and never a draft: drafts need flow.edit).
   "flow.read": (user, record) => flowEditorRoles.includes(user.role) || record === null || (record.published === true && record.retired !== true),
   // Create, save drafts, publish, retire, import.

@@ -8,6 +8,7 @@ import { benchRouter } from "./sessions/bench-router.ts";
 import { attachmentsRouter } from "./attachments/router.ts";
 import { flowsRouter } from "./flows/router.ts";
 import { reviewRouter } from "./review/router.ts";
+import { insightRouter } from "./insight/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -27,6 +28,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/attachments", router: attachmentsRouter(ctx) },
     { base: "/api/flows", router: flowsRouter(ctx), ownBodies: true },
     { base: "/api/review", router: reviewRouter(ctx) },
+    { base: "/api/insight", router: insightRouter(ctx) },
   ];
 }
 

@@ -81,6 +81,10 @@ export const accessMatrix: AccessRow[] = [
 
   { method: "GET", route: "/api/bench/home", expect: signedIn(200) },
 
+  // Shop insight is the shop lead's; a tech is refused before the dates are read.
+  { method: "GET", route: "/api/insight", path: "/api/insight?from=2026-01-01&to=2026-03-31", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
+  { method: "GET", route: "/api/insight", path: "/api/insight?from=2026-03-31&to=2026-01-01", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
+
   // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
   { method: "GET", route: "/api/flows", expect: signedIn(200) },
   { method: "POST", route: "/api/flows", body: {}, expect: editors(400) },

@@ -6,6 +6,8 @@ import * as schema from "../schema.ts";
 import { hashPassword } from "../../auth/password.ts";
 import { recordAudit } from "../../services/audit.ts";
 import { installBuiltInFlows } from "../../services/flows.ts";
+import type { Storage } from "../../storage/storage.ts";
+import { seedHistory } from "./history.ts";
 import type { Role } from "../../../shared/schemas/users.ts";
 
 /** The demo scenario: an invented shop and its people. Nothing here is a real business or person. */
@@ -45,13 +47,19 @@ export async function seedDemo(db: Database): Promise<void> {
   });
 }
 
-/** Empties every table, then seeds the demo and the built-in flows again. */
-export async function resetDemo(db: Database): Promise<void> {
+/**
+ * Empties every table (work order numbers start again at 1001), then seeds the demo, the built-in
+ * flows and the demo's history again. With a storage, the old photos' files go and the new ones are written.
+ */
+export async function resetDemo(db: Database, storage?: Storage): Promise<void> {
   const tables = (Object.values(schema) as unknown[]).filter((value): value is PgTable => is(value, PgTable));
   const names = tables.map((t) => `"${getTableName(t)}"`).join(", ");
-  await db.execute(sql.raw(`TRUNCATE ${names} CASCADE`));
+  const files = storage ? await db.select({ main: schema.attachments.storageKey, thumb: schema.attachments.thumbKey }).from(schema.attachments) : [];
+  await db.execute(sql.raw(`TRUNCATE ${names} RESTART IDENTITY CASCADE`));
+  for (let i = 0; storage && i < files.length; i += 32) await Promise.all(files.slice(i, i + 32).flatMap((f) => [storage.delete(f.main), storage.delete(f.thumb)]));
   await seedDemo(db);
   await installBuiltInFlows(db);
+  await seedHistory(db, storage);
 }
 
 export function demoSignInLines(): string[] {
