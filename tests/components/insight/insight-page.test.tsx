@@ -176,6 +176,25 @@ describe("shop insight", () => {
     );
   });
 
+  it("opens a long table on its first rows, shows the rest on request, and puts every row in the CSV", async () => {
+    const many = Array.from({ length: 15 }, (_, i) => ({ flowId: "trimmer", flowTitle: "Trimmer will not start", findingStepId: `f-${i}`, findingTitle: `Finding ${i + 1}`, count: 40 - i }));
+    stubApi(lead, insightAnswers([], (url) => json(buildInsight({ ...rangeOf(url), findingsByFlow: many }))));
+    const blobs: Blob[] = [];
+    vi.stubGlobal("URL", Object.assign(URL, { createObjectURL: (blob: Blob) => (blobs.push(blob), "blob:insight"), revokeObjectURL: () => {} }));
+    vi.spyOn(HTMLAnchorElement.prototype, "click").mockImplementation(() => {});
+    renderApp("/insight?from=2026-03-01&to=2026-03-31");
+    const caption = "Completed sessions per flow and finding (the first 12 of 15 rows)";
+    await screen.findByRole("heading", { name: "Findings per flow" }, { timeout: 5000 });
+    expect(screen.getByRole("table", { name: caption })).toBeInTheDocument();
+    expect(tableRows(caption).map((r) => r[1])).toEqual(many.slice(0, 12).map((r) => r.findingTitle));
+    const section = screen.getByRole("heading", { name: "Findings per flow" }).closest("section")!;
+    const user = userEvent.setup();
+    await user.click(within(section).getByRole("button", { name: "Show all 15 rows" }));
+    expect(tableRows("Completed sessions per flow and finding").map((r) => r[2])).toEqual(many.map((r) => String(r.count)));
+    await user.click(within(section).getByRole("button", { name: "Download CSV" }));
+    expect((await blobs[0]!.text()).trim().split("\r\n")).toHaveLength(16);
+  });
+
   it("writes minutes and percentages as plain numbers in the CSV", async () => {
     stubApi(lead, insightAnswers([]));
     const blobs: Blob[] = [];

@@ -11,6 +11,10 @@ type ByEquipment = InsightResponse["findingsByEquipment"][number];
 type Time = InsightResponse["timeToFinding"][number];
 
 const count = (n: number) => n.toLocaleString("en-GB");
+/** The findings charts draw the most frequent few; the table beside them has every row. */
+const CHART_BARS = 8;
+const topWords = (total: number, what: string) =>
+  total > CHART_BARS ? `The ${CHART_BARS} most frequent ${what} of ${total}; the table has every one.` : undefined;
 
 const byFlowColumns: Column<ByFlow>[] = [
   { header: "Flow", text: (r) => r.flowTitle, csv: (r) => r.flowTitle },
@@ -31,9 +35,10 @@ export function FindingsByFlow({ rows, range }: { rows: ByFlow[]; range: Range }
       range={range}
       charts={
         <InsightBars
-          label="Bar chart of the findings per flow; the table below has the same figures."
+          label="Bar chart of the most frequent findings per flow; the table below has the same figures."
+          note={topWords(rows.length, "findings")}
           series={[{ key: "count", name: "Sessions", colour: "accent" }]}
-          rows={rows.map((r) => ({ label: `${r.findingTitle} (${r.flowTitle})`, count: r.count, valueText: count(r.count) }))}
+          rows={rows.slice(0, CHART_BARS).map((r) => ({ label: `${r.findingTitle} (${r.flowTitle})`, count: r.count, valueText: count(r.count) }))}
         />
       }
     />
@@ -59,9 +64,10 @@ export function FindingsByEquipment({ rows, range }: { rows: ByEquipment[]; rang
       range={range}
       charts={
         <InsightBars
-          label="Bar chart of the findings per kind of equipment; the table below has the same figures."
+          label="Bar chart of the most frequent findings per kind of equipment; the table below has the same figures."
+          note={topWords(rows.length, "findings")}
           series={[{ key: "count", name: "Sessions", colour: "accent" }]}
-          rows={rows.map((r) => ({ label: `${equipmentKindLabels[r.equipmentKind]}: ${r.findingTitle}`, count: r.count, valueText: count(r.count) }))}
+          rows={rows.slice(0, CHART_BARS).map((r) => ({ label: `${equipmentKindLabels[r.equipmentKind]}: ${r.findingTitle}`, count: r.count, valueText: count(r.count) }))}
         />
       }
     />

@@ -32,12 +32,13 @@ const clip = (text: string, width: number) => {
  * Horizontal bars, one row per table row, drawn only once the space has a width (never in a
  * layout-less test browser, where the table beside it carries the figures).
  */
-export function InsightBars({ rows, series, label, unit }: { rows: BarRow[]; series: BarSeries[]; label: string; unit?: string }) {
+export function InsightBars({ rows, series, label, unit, note }: { rows: BarRow[]; series: BarSeries[]; label: string; unit?: string; /** Said above the chart, e.g. that it draws only the most frequent rows. */ note?: string }) {
   const [ref, width] = useElementWidth<HTMLDivElement>();
   const height = rows.length * ROW_HEIGHT + AXIS_HEIGHT + 12;
   const last = series.at(-1)!.key;
   return (
     <div className="flex min-w-0 flex-col gap-2">
+      {note && <p className="text-base text-ink-muted">{note}</p>}
       {series.length > 1 && <Legend series={series} />}
       <div ref={ref} role="img" aria-label={label} className="w-full min-w-0" style={{ height }}>
       {width > 0 && (

@@ -1,4 +1,9 @@
+import { useState } from "react";
+import { Button } from "../../../components/ui/button.tsx";
 import type { CsvValue } from "../lib/csv.ts";
+
+/** A long table opens with this many rows; the rest are a tap away, and always in the CSV. */
+export const TABLE_FIRST_ROWS = 12;
 
 export interface Column<T> {
   header: string;
@@ -13,37 +18,47 @@ export interface Column<T> {
 
 /** The figures behind a chart as a plain table: the first column names each row. */
 export function InsightTable<T>({ caption, columns, rows, rowKey }: { caption: string; columns: Column<T>[]; rows: T[]; rowKey: (row: T) => string }) {
+  const [everyRow, setEveryRow] = useState(false);
+  const folded = !everyRow && rows.length > TABLE_FIRST_ROWS;
+  const shown = folded ? rows.slice(0, TABLE_FIRST_ROWS) : rows;
   return (
-    <div className="overflow-x-auto rounded-lg border-2 border-line">
-      <table className="w-full border-collapse text-left tabular-figures">
-        <caption className="px-4 pt-3 pb-2 text-left font-semibold">{caption}</caption>
-        <thead>
-          <tr className="border-b-2 border-line-strong bg-sunken">
-            {columns.map((c) => (
-              <th key={c.header} scope="col" className={`px-4 py-3 text-base font-semibold ${c.numeric ? "text-right" : ""}`}>
-                {c.header}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((row) => (
-            <tr key={rowKey(row)} className="border-b border-line last:border-b-0">
-              {columns.map((c, i) =>
-                i === 0 ? (
-                  <th key={c.header} scope="row" className="min-w-40 px-4 py-3 font-medium">
-                    {c.text(row)}
-                  </th>
-                ) : (
-                  <td key={c.header} className={`px-4 py-3 ${c.numeric ? "text-right" : ""}`}>
-                    {c.text(row)}
-                  </td>
-                ),
-              )}
+    <div className="flex flex-col gap-3">
+      <div className="overflow-x-auto rounded-lg border-2 border-line">
+        <table className="w-full border-collapse text-left tabular-figures">
+          <caption className="px-4 pt-3 pb-2 text-left font-semibold">{folded ? `${caption} (the first ${TABLE_FIRST_ROWS} of ${rows.length} rows)` : caption}</caption>
+          <thead>
+            <tr className="border-b-2 border-line-strong bg-sunken">
+              {columns.map((c) => (
+                <th key={c.header} scope="col" className={`px-4 py-3 text-base font-semibold ${c.numeric ? "text-right" : ""}`}>
+                  {c.header}
+                </th>
+              ))}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {shown.map((row) => (
+              <tr key={rowKey(row)} className="border-b border-line last:border-b-0">
+                {columns.map((c, i) =>
+                  i === 0 ? (
+                    <th key={c.header} scope="row" className="min-w-40 px-4 py-3 font-medium">
+                      {c.text(row)}
+                    </th>
+                  ) : (
+                    <td key={c.header} className={`px-4 py-3 ${c.numeric ? "text-right" : ""}`}>
+                      {c.text(row)}
+                    </td>
+                  ),
+                )}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {rows.length > TABLE_FIRST_ROWS && (
+        <Button className="self-start" aria-expanded={everyRow} onClick={() => setEveryRow(!everyRow)}>
+          {everyRow ? `Show the first ${TABLE_FIRST_ROWS} rows only` : `Show all ${rows.length} rows`}
+        </Button>
+      )}
     </div>
   );
 }
