@@ -22,7 +22,8 @@ export const customers = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("customers_name_idx").on(t.name)],
+  // Trigram indexes (pg_trgm) serve the review queue's search, an ILIKE on any part of the name.
+  (t) => [index("customers_name_idx").on(t.name), index("customers_name_trgm_idx").using("gin", t.name.op("gin_trgm_ops"))],
 );
 
 /** A piece of equipment as it came in: make and model as printed on it. */
@@ -45,7 +46,11 @@ export const units = pgTable(
     hours: doublePrecision("hours"),
     createdAt: createdAt(),
   },
-  (t) => [index("units_customer_idx").on(t.customerId), check("units_cycle", sql`${t.cycle} in (2, 4)`)],
+  (t) => [
+    index("units_customer_idx").on(t.customerId),
+    index("units_make_model_trgm_idx").using("gin", sql`(${t.make} || ' ' || ${t.model}) gin_trgm_ops`),
+    check("units_cycle", sql`${t.cycle} in (2, 4)`),
+  ],
 );
 
 export const workOrders = pgTable(
