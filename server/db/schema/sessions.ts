@@ -50,10 +50,9 @@ export const diagnosticSessions = pgTable(
     index("diagnostic_sessions_tech_idx").on(t.techId, t.status),
     index("diagnostic_sessions_flow_version_idx").on(t.flowVersionId, t.status),
     index("diagnostic_sessions_review_idx").on(t.reviewState, t.startedAt),
-    // The review queue's default order, and every column shop insight reads for a date range, so
-    // both are answered from the index alone.
-    index("diagnostic_sessions_started_idx").on(t.startedAt.desc().nullsLast(), t.status, t.reviewState, t.flagCount, t.techId, t.flowVersionId, t.findingStepId, t.workOrderId, t.completedAt),
-    // The queue by review state, latest completed first (deep pages included), and one tech's sessions newest first.
+    // The review queue's pages in its default orders: everything newest first (and shop insight's
+    // shorter date ranges), by review state latest completed first, one tech's newest first.
+    index("diagnostic_sessions_started_idx").on(t.startedAt.desc().nullsLast(), t.id),
     index("diagnostic_sessions_review_completed_idx").on(t.reviewState, t.completedAt.desc().nullsLast(), t.id),
     index("diagnostic_sessions_tech_started_idx").on(t.techId, t.startedAt.desc().nullsLast(), t.id),
   ],
