@@ -5,6 +5,8 @@ import { equipmentKinds } from "../equipment.ts";
 export const INSIGHT_MAX_DAYS = 366 * 3;
 const DAY_MS = 86_400_000;
 const isoDay = (name: string) => z.iso.date({ error: `${name} is a date written YYYY-MM-DD.` });
+// The range checks speak only about two real dates: a malformed day gets its own message and no other.
+const datesValid = { when: (payload: { issues: readonly unknown[] }) => payload.issues.length === 0 };
 
 /**
  * GET /api/insight — the shop lead's figures over whole UTC days, both ends included, by the day a
@@ -12,8 +14,8 @@ const isoDay = (name: string) => z.iso.date({ error: `${name} is a date written 
  */
 export const insightQuerySchema = z
   .strictObject({ from: isoDay("from"), to: isoDay("to") }, { error: (issue) => (issue.code === "unrecognized_keys" ? `Unknown parameter: ${issue.keys.join(", ")}.` : undefined) })
-  .refine((q) => q.from <= q.to, { path: ["to"], message: "to must be on or after from." })
-  .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / DAY_MS < INSIGHT_MAX_DAYS, { path: ["from"], message: `Choose a range of at most ${INSIGHT_MAX_DAYS} days.` });
+  .refine((q) => q.from <= q.to, { path: ["to"], message: "to must be on or after from.", ...datesValid })
+  .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / DAY_MS < INSIGHT_MAX_DAYS, { path: ["from"], message: `Choose a range of at most ${INSIGHT_MAX_DAYS} days.`, ...datesValid });
 export type InsightQuery = z.output<typeof insightQuerySchema>;
 
 const share = z.number().min(0).max(1).nullable();

@@ -1,7 +1,5 @@
-import { LaterReleasePanel } from "../../components/ui/later-release-panel.tsx";
-import { areas } from "../areas.ts";
+import { InsightPage } from "../../features/insight/components/insight-page.tsx";
 
 export function Component() {
-  const { label, summary } = areas["insight"];
-  return <LaterReleasePanel title={label} summary={summary} />;
+  return <InsightPage />;
 }

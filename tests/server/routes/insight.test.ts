@@ -298,6 +298,12 @@ describe("GET /api/insight", () => {
     expect(res.body.error.details.fieldErrors[field][0]).toMatch(message);
   });
 
+  it("gives a malformed day its own message and no other", async () => {
+    const res = await lead.agent.get("/api/insight").query({ from: "2026-04-01", to: "30/04/2026" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.details.fieldErrors).toEqual({ to: ["to is a date written YYYY-MM-DD."] });
+  });
+
   it("refuses a parameter it does not know, and a repeated one", async () => {
     const res = await lead.agent.get("/api/insight").query({ from: "2026-04-01", to: "2026-04-30", tech: "x" });
     expect(res.status).toBe(400);
