@@ -8,7 +8,7 @@ import v8 from "node:v8";
 import vm from "node:vm";
 import { count, eq, sql } from "drizzle-orm";
 import { openDatabase } from "../../server/db/client.ts";
-import { acquireDataLock } from "../../server/db/lock.ts";
+import { acquireDataLock, DataFolderLockedError } from "../../server/db/lock.ts";
 import { diagnosticSessions, sessionEvents, users } from "../../server/db/schema.ts";
 import { demoUsers } from "../../server/db/seed/demo.ts";
 import { lastNames } from "../../server/db/seed/history-cast.ts";
@@ -44,7 +44,17 @@ function percentile(xs: number[], p: number): number {
 const summary = (ms: number[]) => ({ p50Ms: percentile(ms, 50), p95Ms: percentile(ms, 95), runs: ms.length });
 const day = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 
-const lock = acquireDataLock(dir);
+function lockOrExit() {
+  try {
+    return acquireDataLock(dir);
+  } catch (error) {
+    if (!(error instanceof DataFolderLockedError)) throw error;
+    console.error(error.message);
+    process.exit(1);
+  }
+}
+
+const lock = lockOrExit();
 const opening = performance.now();
 const handle = await openDatabase({ kind: "pglite", dataDir: pgdata });
 try {
