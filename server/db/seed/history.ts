@@ -98,8 +98,11 @@ export async function planHistory(db: Database, overrides: Partial<HistoryOption
  * their rows are (the server tests and the load data need no pictures).
  */
 export async function seedHistory(db: Database, storage?: Storage, overrides: Partial<HistoryOptions> = {}): Promise<HistoryCounts> {
+  const extra = overrides.extraTechs ?? demoHistory.extraTechs;
+  // argon2 works on its own threads while the history is planned.
+  const hashing = Promise.all([...new Set(extra.map((t) => t.password))].map(async (p) => [p, await hashPassword(p)] as const));
   const { options, techs, photos, batches } = await planHistory(db, overrides);
-  const hashes = new Map(await Promise.all([...new Set(techs.map((t) => t.password))].map(async (p) => [p, await hashPassword(p)] as const)));
+  const hashes = new Map(await hashing);
   const counts: HistoryCounts = { users: techs.length, customers: 0, workOrders: 0, sessions: 0, events: 0, attachments: 0 };
   let first = true;
   for (const rows of batches()) {

@@ -34,8 +34,9 @@ async function main() {
         sessions,
         onBatch: (c) => process.stdout.write(`  ${c.sessions.toLocaleString("en-US")} sessions, ${c.events.toLocaleString("en-US")} events (${seconds()} s)\n`),
       });
-      process.stdout.write(`Analysing the tables (${seconds()} s)\n`);
-      await handle.db.execute(sql`ANALYZE`);
+      // VACUUM marks the pages all-visible, so the queries can read from their indexes alone.
+      process.stdout.write(`Vacuuming and analysing the tables (${seconds()} s)\n`);
+      await handle.db.execute(sql`VACUUM ANALYZE`);
       await handle.checkpoint();
       process.stdout.write(`Done in ${seconds()} s: ${JSON.stringify(counts)}\n`);
     } finally {
