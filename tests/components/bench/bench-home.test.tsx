@@ -80,7 +80,7 @@ describe("the bench home's own checks", () => {
     expect(comment).toHaveTextContent("Drain the bowl into a clear jar and photograph it before you call it stale.");
     expect(within(card).getByText("Stale fuel in the bowl")).toBeInTheDocument();
     expect(within(card).getByRole("link", { name: "Open the work order WO 1031" })).toHaveAttribute("href", "/work-orders/wo-4");
-    expect(within(card).getByRole("link", { name: "See the check WO 1031" })).toHaveAttribute("href", "/bench/sessions/se-4");
+    expect(within(card).getByRole("link", { name: "Revise the check WO 1031" })).toHaveAttribute("href", "/bench/sessions/se-4");
   });
 
   it("says so when the shop lead sent a session back without a comment", async () => {

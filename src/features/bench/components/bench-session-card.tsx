@@ -58,13 +58,16 @@ function SessionActions({ session, kind, number }: { session: BenchSession; kind
     case "waiting":
       return seeCheck;
     case "returned":
-      // A sent-back check is closed: the work order is where the check is started again.
+      // A sent-back check is revised where it stands: the check's page opens it again at its finding.
       return (
         <>
-          <Link to={workOrderPath(session.workOrderId)} className={`${buttonClasses({ variant: "primary", size: "main" })} w-full`}>
+          <Link to={sessionPath(session.sessionId)} className={`${buttonClasses({ variant: "primary", size: "main" })} w-full`}>
+            Revise the check{forNumber}
+            <ArrowGlyph />
+          </Link>
+          <Link to={workOrderPath(session.workOrderId)} className={`${buttonClasses({ variant: "secondary" })} w-full`}>
             Open the work order{forNumber}
           </Link>
-          {seeCheck}
         </>
       );
   }
