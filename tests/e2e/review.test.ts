@@ -92,7 +92,17 @@ describe("reviewing the apprentice's work", () => {
     await snap(tablet, "review-returned-bench-portrait");
     await tablet.goto(`${server.url}/bench/sessions/${sessionId}`);
     await seen(tablet.getByRole("region", { name: "The shop lead says" }).getByText(comment), "the lead's comment on the session");
-    await seen(tablet.getByRole("button", { name: "Open the check again to revise it" }), "the way to revise the check");
+    await tablet.getByRole("button", { name: "Open the check again to revise it" }).click();
+    // Open again at its finding: one step back, and the session's log grows by that step.
+    await tablet.getByRole("button", { name: /Back one step/ }).click();
+    type Revised = { status: string; findingStepId: string | null; events: { event: { type: string } }[] };
+    const revisedNow = async () => (await (await bench.request.get(`${server.url}/api/sessions/${sessionId}`)).json()) as Revised;
+    await expect.poll(async () => (await revisedNow()).events.length, { timeout: 15_000 }).toBe(detail.events.length + 1);
+    const revised = await revisedNow();
+    expect(revised.status).toBe("open");
+    expect(revised.findingStepId).toBeNull();
+    expect(revised.events.at(-1)?.event.type).toBe("step.back");
+    await snap(tablet, "review-revising-portrait");
     expect(benchErrors).toEqual([]);
     await bench.close();
   }, 120_000);
