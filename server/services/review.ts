@@ -5,6 +5,7 @@ import { authorize, can } from "../auth/policies.ts";
 import { conflict, notFound } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
 import { compiledVersion } from "./flows.ts";
+import { flagLimits } from "./settings.ts";
 import { sessionEventsOf, toStoredEvent } from "./sessions.ts";
 import { sessionFlags } from "../../shared/review/flags.ts";
 import type { ReviewDecisionRequest, SessionFlagsResponse } from "../../shared/schemas/review.ts";
@@ -40,6 +41,6 @@ export async function flagsOfSession(ctx: Pick<AppContext, "db">, user: PublicUs
   if (session.flags) return { sessionId: id, computedAt: (session.completedAt ?? now).toISOString(), flags: session.flags };
   const events = await sessionEventsOf(ctx.db, id);
   const flow = await compiledVersion(ctx.db, session.flowVersionId);
-  const flags = sessionFlags({ flow, input: session.input, events: events.map(toStoredEvent), status: session.status, startedAt: session.startedAt, completedAt: session.completedAt, now });
+  const flags = sessionFlags({ flow, input: session.input, events: events.map(toStoredEvent), status: session.status, startedAt: session.startedAt, completedAt: session.completedAt, now }, await flagLimits(ctx));
   return { sessionId: id, computedAt: now.toISOString(), flags };
 }

@@ -7,6 +7,7 @@ import { recordAudit } from "./audit.ts";
 import { compiledVersion } from "./flows.ts";
 import { sessionEventsOf, sessionFor, toStoredEvent } from "./sessions.ts";
 import { moveWorkOrder } from "./work-orders.ts";
+import { flagLimits } from "./settings.ts";
 import { replaySession } from "../../shared/flow/session-log.ts";
 import { sessionFlags } from "../../shared/review/flags.ts";
 import type { PublicUser } from "../../shared/schemas/users.ts";
@@ -46,7 +47,7 @@ export async function completeSession(ctx: Pick<AppContext, "db">, user: PublicU
     }
     const completedAt = new Date();
     // Computed once, here, so the review queue can filter on the count.
-    const flags = sessionFlags({ flow, input: session.input, events: events.map(toStoredEvent), status: "completed", startedAt: session.startedAt, completedAt, now: completedAt });
+    const flags = sessionFlags({ flow, input: session.input, events: events.map(toStoredEvent), status: "completed", startedAt: session.startedAt, completedAt, now: completedAt }, await flagLimits({ db: tx }));
     await tx
       .update(diagnosticSessions)
       .set({ status: "completed", reviewState: "waiting", completedAt, currentStepId: result.stepId, findingStepId: result.findingStepId, flags, flagCount: flags.length })

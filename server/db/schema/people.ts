@@ -51,12 +51,15 @@ export const shopSettings = pgTable(
     currency: text("currency").notNull().default("USD"),
     defaultUnitSystem: unitSystemEnum("default_unit_system").notNull().default("imperial"),
     altitudeM: integer("altitude_m").notNull().default(0),
+    /** A session open longer than this many hours is flagged for the shop lead. */
+    reviewOpenHours: integer("review_open_hours").notNull().default(24),
     updatedAt: updatedAt(),
   },
   (t) => [
     check("shop_settings_single_row", sql`${t.id} = 1`),
     check("shop_settings_money_non_negative", sql`${t.labourRateCents} >= 0 and ${t.diagnosticFeeCents} >= 0`),
     check("shop_settings_currency_code", sql`${t.currency} ~ '^[A-Z]{3}$'`),
+    check("shop_settings_review_open_hours", sql`${t.reviewOpenHours} between 1 and 720`),
   ],
 );
 

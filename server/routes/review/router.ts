@@ -5,6 +5,7 @@ import { validate } from "../../lib/validate.ts";
 import { currentUser, requireUser } from "../../auth/middleware.ts";
 import { reviewQueue } from "../../services/review-queue.ts";
 import { flagsOfSession } from "../../services/review.ts";
+import { flagLimits } from "../../services/settings.ts";
 import { reviewOptions } from "../../services/review-options.ts";
 import { idParamsSchema } from "../../../shared/schemas/work-orders.ts";
 import { reviewOptionsQuerySchema, reviewQueueQuerySchema, type ReviewQueueQuery } from "../../../shared/schemas/review.ts";
@@ -18,7 +19,7 @@ export function reviewRouter(ctx: AppContext): Router {
   const router = Router();
 
   router.get("/sessions", requireUser, validate({ query: reviewQueueQuerySchema }), async (_req: Request, res: Response) => {
-    res.json(await reviewQueue(ctx, currentUser(res), res.locals.query as ReviewQueueQuery));
+    res.json(await reviewQueue(ctx, currentUser(res), res.locals.query as ReviewQueueQuery, new Date(), await flagLimits(ctx)));
   });
 
   router.get("/options", requireUser, validate({ query: reviewOptionsQuerySchema }), async (_req: Request, res: Response) => {

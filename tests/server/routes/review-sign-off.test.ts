@@ -6,7 +6,7 @@ import { signedInAs } from "../helpers/sign-in.ts";
 import { buildSession } from "../../factories/sessions.ts";
 import { buildAttachment } from "../../factories/attachments.ts";
 import { appendRequests, gatedEvents, handheldToFinding, moveEvent } from "../../factories/session-events.ts";
-import { auditLog, diagnosticSessions, sessionEvents } from "../../../server/db/schema.ts";
+import { auditLog, diagnosticSessions, sessionEvents, shopSettings } from "../../../server/db/schema.ts";
 import { compiledVersion, installBuiltInFlows } from "../../../server/services/flows.ts";
 
 let t: TestApp;
@@ -95,6 +95,24 @@ describe("POST /api/sessions/:id/review", () => {
     const twice = await tech.agent.post(`/api/sessions/${session.id}/reopen`);
     expect(twice.status).toBe(409);
     expect(twice.body.error.id).toBe("not_returned");
+  });
+
+  it("flags a session left open by the shop's own limit, in its flags and in the queue", async () => {
+    const session = await buildSession(t.ctx.db, { techId: tech.user.id, startedAt: new Date(Date.now() - 3 * 3_600_000) });
+    const openTooLong = async () => ((await lead.agent.get(`/api/review/sessions/${session.id}/flags`)).body.flags as { code: string; reason: string }[]).filter((f) => f.code === "open_too_long");
+    const flaggedIds = async () => ((await lead.agent.get("/api/review/sessions").query({ flagged: "true", pageSize: "100" })).body.rows as { sessionId: string }[]).map((r) => r.sessionId);
+    // Three hours open is within the usual 24.
+    expect(await openTooLong()).toEqual([]);
+    expect(await flaggedIds()).not.toContain(session.id);
+    await t.ctx.db.insert(shopSettings).values({ id: 1, name: "Test shop", labourRateCents: 0, diagnosticFeeCents: 0, reviewOpenHours: 2 }).onConflictDoUpdate({ target: shopSettings.id, set: { reviewOpenHours: 2 } });
+    try {
+      const flags = await openTooLong();
+      expect(flags).toHaveLength(1);
+      expect(flags[0]!.reason).toMatch(/has been open for 3 hours, more than the 2 hours/);
+      expect(await flaggedIds()).toContain(session.id);
+    } finally {
+      await t.ctx.db.update(shopSettings).set({ reviewOpenHours: 24 });
+    }
   });
 
   it("asks for a comment beside the field on a return, and refuses one over 2000 characters", async () => {

@@ -1,0 +1,2 @@
+ALTER TABLE "shop_settings" ADD COLUMN "review_open_hours" integer DEFAULT 24 NOT NULL;--> statement-breakpoint
+ALTER TABLE "shop_settings" ADD CONSTRAINT "shop_settings_review_open_hours" CHECK ("shop_settings"."review_open_hours" between 1 and 720);
