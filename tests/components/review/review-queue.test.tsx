@@ -10,6 +10,18 @@ const paramsOf = (search: string) => Object.fromEntries(new URLSearchParams(sear
 const table = () => screen.findByRole("table", { name: "Sessions" }, { timeout: 5000 });
 
 describe("the review queue", () => {
+  it("goes to the flagged checks waiting for sign-off in one tap, and marks that view as the one shown", async () => {
+    const seen: string[] = [];
+    stubApi(lead, optionsAnswers, queueAnswers(seen));
+    const { router } = renderApp("/review");
+    await screen.findByRole("link", { name: "WO 1042" }, { timeout: 5000 });
+    await userEvent.setup().click(screen.getByRole("link", { name: "Flagged, waiting" }));
+    await waitFor(() => expect(paramsOf(seen.at(-1)!)).toEqual({ reviewState: "waiting", flagged: "true" }));
+    expect(router.state.location.search).toBe("?reviewState=waiting&flagged=true");
+    expect(screen.getByRole("link", { name: "Flagged, waiting" })).toHaveAttribute("aria-current", "page");
+    expect(screen.getByRole("link", { name: "Waiting for sign-off" })).not.toHaveAttribute("aria-current");
+  });
+
   it("opens on the sessions waiting for sign-off, each row a link to the session", async () => {
     const seen: string[] = [];
     stubApi(lead, optionsAnswers, queueAnswers(seen));

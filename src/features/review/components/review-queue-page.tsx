@@ -4,7 +4,7 @@ import { Link } from "react-router";
 import { reviewOptionsQueryOptions } from "../api/get-review-options.ts";
 import { reviewQueueQueryOptions } from "../api/list-review-sessions.ts";
 import { extraFilterCount, queueRequest, withoutFilters } from "../lib/queue-params.ts";
-import { allSessionsSearch, waitingSearch } from "../lib/queue-views.ts";
+import { allSessionsSearch, flaggedWaitingSearch, waitingSearch } from "../lib/queue-views.ts";
 import { queueRefusalOf } from "../lib/queue-refusal.ts";
 import { useQueueAddress, useQueueTable } from "../lib/use-queue-table.ts";
 import { QueueFilters } from "./queue-filters.tsx";
@@ -27,6 +27,7 @@ export function ReviewQueuePage() {
   const panelFilters = extraFilterCount(view.filters) - (view.filters.search ? 1 : 0);
   const [showFilters, setShowFilters] = useState(panelFilters > 0);
   const waitingOnly = view.filters.reviewState === "waiting" && extraFilterCount(view.filters) === 0;
+  const flaggedWaiting = view.filters.reviewState === "waiting" && view.filters.flagged === "true" && extraFilterCount(view.filters) === 1;
   const clear = () => setParams(withoutFilters(params));
   return (
     <div className="flex max-w-6xl flex-col gap-6">
@@ -34,7 +35,7 @@ export function ReviewQueuePage() {
         <h1 className="text-step font-semibold">Review</h1>
         <p className="max-w-[65ch] text-ink-muted">Go through each finished check step by step, then sign it off or send it back to the tech with a comment.</p>
       </div>
-      <Presets reviewState={view.filters.reviewState} waitingOnly={waitingOnly} />
+      <Presets reviewState={view.filters.reviewState} waitingOnly={waitingOnly} flaggedWaiting={flaggedWaiting} />
       <div role="search" aria-label="Sessions" className="flex flex-col gap-4">
         <div className="grid grid-cols-[1fr_auto] items-end gap-4">
           <QueueSearch value={view.filters.search ?? ""} error={errors.search} onSearch={(text) => table.setGlobalFilter(text)} />
@@ -72,17 +73,25 @@ export function ReviewQueuePage() {
   );
 }
 
-/** The two views a shop lead goes between most: what waits for them, and everything. */
-function Presets({ reviewState, waitingOnly }: { reviewState: string | undefined; waitingOnly: boolean }) {
-  const current = (on: boolean) => (on ? "border-accent bg-accent text-accent-ink" : "border-line-strong bg-raised text-ink");
+/** The views a shop lead goes between most: what waits for them, what of it is flagged, and everything. */
+function Presets({ reviewState, waitingOnly, flaggedWaiting }: { reviewState: string | undefined; waitingOnly: boolean; flaggedWaiting: boolean }) {
+  const views = [
+    { search: waitingSearch, label: "Waiting for sign-off", on: waitingOnly },
+    { search: flaggedWaitingSearch, label: "Flagged, waiting", on: flaggedWaiting },
+    { search: allSessionsSearch, label: "All sessions", on: reviewState === undefined },
+  ];
   return (
     <nav aria-label="Views" className="flex flex-wrap gap-3">
-      <Link to={{ search: waitingSearch }} aria-current={waitingOnly ? "page" : undefined} className={`inline-flex min-h-14 items-center rounded-lg border-2 px-5 font-semibold ${current(waitingOnly)}`}>
-        Waiting for sign-off
-      </Link>
-      <Link to={{ search: allSessionsSearch }} aria-current={reviewState === undefined ? "page" : undefined} className={`inline-flex min-h-14 items-center rounded-lg border-2 px-5 font-semibold ${current(reviewState === undefined)}`}>
-        All sessions
-      </Link>
+      {views.map((view) => (
+        <Link
+          key={view.search}
+          to={{ search: view.search }}
+          aria-current={view.on ? "page" : undefined}
+          className={`inline-flex min-h-14 items-center rounded-lg border-2 px-5 font-semibold ${view.on ? "border-accent bg-accent text-accent-ink" : "border-line-strong bg-raised text-ink"}`}
+        >
+          {view.label}
+        </Link>
+      ))}
     </nav>
   );
 }
