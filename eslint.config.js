@@ -42,7 +42,7 @@ export default tseslint.config(
       "no-restricted-imports": ["error", {
         patterns: [
           { group: ["**/server/**", "**/server"], message: "The client never imports server code." },
-          { group: features.filter((f) => f !== feature).map((f) => `**/features/${f}/**`), message: "Features do not import each other: move shared code to src/components or src/lib." },
+          { group: features.filter((f) => f !== feature).flatMap((f) => [`**/features/${f}/**`, `../../${f}/**`]), message: "Features do not import each other: move shared code to src/components or src/lib." },
         ],
       }],
     },

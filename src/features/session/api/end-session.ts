@@ -2,7 +2,6 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { sessionDetailSchema } from "../../../../shared/schemas/sessions.ts";
 import { apiFetch } from "../../../lib/api-client.ts";
 import { sessionKeys } from "./get-session.ts";
-import { benchKeys } from "../../bench/api/get-bench-home.ts";
 
 export function useCompleteSession(sessionId: string) {
   const queryClient = useQueryClient();
@@ -25,9 +24,7 @@ export function useReopenSession(sessionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => apiFetch(`/api/sessions/${encodeURIComponent(sessionId)}/reopen`, { method: "POST", schema: sessionDetailSchema }),
-    onSuccess: (detail) => {
-      queryClient.setQueryData(sessionKeys.detail(sessionId), detail);
-      return queryClient.invalidateQueries({ queryKey: benchKeys.all });
-    },
+    // The bench home asks again on every visit, so it shows the check as open once the tech goes back.
+    onSuccess: (detail) => queryClient.setQueryData(sessionKeys.detail(sessionId), detail),
   });
 }
