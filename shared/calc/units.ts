@@ -171,3 +171,9 @@ export function checkReading(input: { quantity: Quantity; value: unknown; unit: 
   }
   return { ok: true, value, unit, canonical };
 }
+
+/** A value in every unit of its quantity, the given unit first. */
+export function inEveryUnit(value: number, unit: Unit): { unit: Unit; value: number }[] {
+  const others = unitsByQuantity[quantityOf(unit)].filter((u) => u !== unit);
+  return [unit, ...others].map((u) => ({ unit: u, value: convert(value, unit, u) }));
+}

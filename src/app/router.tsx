@@ -50,6 +50,7 @@ function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteO
     bench: [
       { index: true, lazy: () => bench().then((module) => ({ Component: module.BenchHomeRoute })) },
       { path: "sessions/:sessionId", lazy: () => bench().then((module) => ({ Component: module.SessionRoute })) },
+      { path: "calculators", lazy: () => bench().then((module) => ({ Component: module.CalculatorsRoute })) },
     ],
     "work-orders": [
       { index: true, lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderListRoute })) },

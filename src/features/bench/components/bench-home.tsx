@@ -13,10 +13,15 @@ export function BenchHome({ waiting }: { waiting: ReactNode }) {
           <h1 className="text-step font-semibold">Bench</h1>
           <p className="max-w-[60ch] text-ink-muted">Carry on with your checks, check in the unit in front of you, or open one that is waiting and start its check.</p>
         </div>
-        <Link to="/work-orders/new" className={`${buttonClasses({ variant: "primary", size: "main" })} min-w-64`}>
-          <PlusGlyph />
-          Check in a unit
-        </Link>
+        <div className="flex flex-wrap gap-3">
+          <Link to="/bench/calculators" className={buttonClasses({ size: "main" })}>
+            Bench calculators
+          </Link>
+          <Link to="/work-orders/new" className={`${buttonClasses({ variant: "primary", size: "main" })} min-w-64`}>
+            <PlusGlyph />
+            Check in a unit
+          </Link>
+        </div>
       </div>
       <BenchSessions />
       {waiting}

@@ -4,8 +4,8 @@ import type { CompiledStep } from "../../../../shared/flow/compile.ts";
 import type { StepRecordEvent } from "../../../../shared/flow/schema.ts";
 import { Button } from "../../../components/ui/button.tsx";
 import { FieldError } from "../../../components/ui/field-error.tsx";
-import { NumericKeypad, pressKey } from "./numeric-keypad.tsx";
-import { UnitSwitch } from "./unit-switch.tsx";
+import { NumericKeypad, pressKey } from "../../../components/ui/numeric-keypad.tsx";
+import { UnitSwitch } from "../../../components/ui/unit-switch.tsx";
 
 type ReadingStep = Extract<CompiledStep, { kind: "reading" }>;
 

@@ -1,4 +1,4 @@
-import { unitLabel, type Unit } from "../../../../shared/calc/units.ts";
+import { unitLabel, type Unit } from "../../../shared/calc/units.ts";
 
 /** The units of the step's quantity as a row of big toggles; the chosen one is marked by a border and a tick. */
 export function UnitSwitch({ units, value, onChange }: { units: readonly Unit[]; value: Unit; onChange: (unit: Unit) => void }) {
