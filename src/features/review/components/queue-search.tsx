@@ -1,22 +1,10 @@
-import { useEffect, useState } from "react";
 import { buttonClasses } from "../../../components/ui/button.tsx";
 import { TextField } from "../../../components/ui/text-field.tsx";
-
-const searchDelayMs = 300;
+import { useDebouncedText } from "../../../lib/use-debounced-text.ts";
 
 /** Customer or unit, sent once typing pauses; follows the address when the back button changes it. */
 export function QueueSearch({ value, error, onSearch }: { value: string; error?: string; onSearch: (text: string) => void }) {
-  const [typed, setTyped] = useState(value);
-  const [seen, setSeen] = useState(value);
-  if (value !== seen) {
-    setSeen(value);
-    setTyped(value);
-  }
-  useEffect(() => {
-    if (typed === value) return;
-    const timer = setTimeout(() => onSearch(typed), searchDelayMs);
-    return () => clearTimeout(timer);
-  }, [typed, value, onSearch]);
+  const [typed, setTyped] = useDebouncedText(value, onSearch);
   return (
     <TextField
       id="queue-search"

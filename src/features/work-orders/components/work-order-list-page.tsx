@@ -1,4 +1,3 @@
-import { useEffect, useState } from "react";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { Link, useSearchParams } from "react-router";
 import { buttonClasses } from "../../../components/ui/button.tsx";
@@ -6,10 +5,10 @@ import { ChoiceGroup } from "../../../components/ui/choice-group.tsx";
 import { FormProblem } from "../../../components/ui/form-message.tsx";
 import { PlusGlyph } from "../../../components/ui/plus-glyph.tsx";
 import { TextField } from "../../../components/ui/text-field.tsx";
+import { useDebouncedText } from "../../../lib/use-debounced-text.ts";
 import { workOrderListQueryOptions } from "../api/list-work-orders.ts";
 import { WorkOrderRows } from "./work-order-rows.tsx";
 
-const searchDelayMs = 300;
 const showChoices = [
   { value: "open", label: "Open" },
   { value: "all", label: "All" },
@@ -24,27 +23,15 @@ export function WorkOrderListPage() {
   const [params, setParams] = useSearchParams();
   const q = params.get("q") ?? "";
   const state = params.get("state") === "all" ? "all" : "open";
-  const [typed, setTyped] = useState(q);
-  const [seenQ, setSeenQ] = useState(q);
-  // The back button can change the address under the box: follow it rather than overwrite it.
-  if (q !== seenQ) {
-    setSeenQ(q);
-    setTyped(q);
-  }
-
   // The address holds the search, so a reload or the back button brings it back.
-  useEffect(() => {
-    if (typed === q) return;
-    const timer = setTimeout(() => {
-      setParams((current) => {
-        const next = new URLSearchParams(current);
-        if (typed.trim() === "") next.delete("q");
-        else next.set("q", typed);
-        return next;
-      }, { replace: true });
-    }, searchDelayMs);
-    return () => clearTimeout(timer);
-  }, [typed, q, setParams]);
+  const [typed, setTyped] = useDebouncedText(q, (text) =>
+    setParams((current) => {
+      const next = new URLSearchParams(current);
+      if (text.trim() === "") next.delete("q");
+      else next.set("q", text);
+      return next;
+    }, { replace: true }),
+  );
 
   const setState = (value: "open" | "all") =>
     setParams((current) => {
