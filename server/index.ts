@@ -84,6 +84,7 @@ async function main() {
     const lines = [`Benchpath is running (${handle.kind}: ${handle.location}).`, ...urls(address, env.HOST).map((u) => `  open ${u}`)];
     process.stdout.write(`${lines.join("\n")}\n`);
     void printDemoSignIns(ctx.db);
+    if (ctx.mail.mode === "sink") logger.info("mail goes to the built-in sink (SMTP_URL is not set); the shop lead reads it under Sent mail");
     rollingBackup(handle, env.DATA_DIR, env.BACKUPS_KEPT)
       .then((file) => file && logger.info({ file }, "backup written"))
       .catch((error: unknown) => logger.warn({ err: error }, "backup failed"));
@@ -102,6 +103,7 @@ async function main() {
     server.close(async () => {
       clearTimeout(force);
       try {
+        await ctx.mail.close();
         await handle.checkpoint();
         await handle.close();
       } finally {

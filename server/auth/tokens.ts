@@ -8,3 +8,8 @@ export function newSessionToken(): string {
 export function hashToken(token: string): string {
   return createHash("sha256").update(token).digest("hex");
 }
+
+/** 256 bits, base64url, for a link sent by e-mail (estimate answers, invitations, resets); only its hash is stored. */
+export function newLinkToken(): string {
+  return randomBytes(32).toString("base64url");
+}

@@ -17,6 +17,9 @@ export const users = pgTable("users", {
   unitSystem: unitSystemEnum("unit_system").notNull().default("imperial"),
   passwordHash: text("password_hash").notNull(),
   passwordChangedAt: timestamp("password_changed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  /** Set when the shop lead invited this person by e-mail; joinedAt stays empty until they set a password. */
+  invitedAt: timestamp("invited_at", { withTimezone: true, mode: "date" }),
+  joinedAt: timestamp("joined_at", { withTimezone: true, mode: "date" }),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });
@@ -53,6 +56,14 @@ export const shopSettings = pgTable(
     altitudeM: integer("altitude_m").notNull().default(0),
     /** A session open longer than this many hours is flagged for the shop lead. */
     reviewOpenHours: integer("review_open_hours").notNull().default(24),
+    /** Whether labour and the diagnostic fee are taxed as well as parts. */
+    taxLabour: boolean("tax_labour").notNull().default(false),
+    /** A repair at or above this share of a new unit's price is worth a second thought. */
+    replaceThresholdPercent: integer("replace_threshold_percent").notNull().default(50),
+    /** How many days a sent estimate may be answered. */
+    estimateValidDays: integer("estimate_valid_days").notNull().default(30),
+    /** The shop's own warranty terms, printed on the customer report. */
+    warrantyNote: text("warranty_note").notNull().default(""),
     updatedAt: updatedAt(),
   },
   (t) => [
@@ -60,6 +71,9 @@ export const shopSettings = pgTable(
     check("shop_settings_money_non_negative", sql`${t.labourRateCents} >= 0 and ${t.diagnosticFeeCents} >= 0`),
     check("shop_settings_currency_code", sql`${t.currency} ~ '^[A-Z]{3}$'`),
     check("shop_settings_review_open_hours", sql`${t.reviewOpenHours} between 1 and 720`),
+    check("shop_settings_tax_rate", sql`${t.taxRateBasisPoints} between 0 and 10000`),
+    check("shop_settings_replace_threshold", sql`${t.replaceThresholdPercent} between 1 and 100`),
+    check("shop_settings_estimate_valid_days", sql`${t.estimateValidDays} between 1 and 365`),
   ],
 );
 

@@ -1,6 +1,6 @@
 // The counter's records: customers, their units, work orders with their state history, and photos.
 import { sql } from "drizzle-orm";
-import { check, doublePrecision, index, integer, pgEnum, pgTable, text, uuid } from "drizzle-orm/pg-core";
+import { boolean, check, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, uuid } from "drizzle-orm/pg-core";
 import { compressionReleaseValues, equipmentKinds } from "../../../shared/equipment.ts";
 import { tankContents, workOrderStates } from "../../../shared/schemas/work-orders.ts";
 import { at, createdAt, updatedAt } from "./columns.ts";
@@ -92,6 +92,24 @@ export const workOrderStateHistory = pgTable(
   (t) => [index("work_order_state_history_order_idx").on(t.workOrderId, t.at)],
 );
 
+/** A test run after the repair: each check of the short list passed or not, by whom and when. */
+export const workOrderTestRuns = pgTable(
+  "work_order_test_runs",
+  {
+    id: uuid("id").primaryKey(),
+    workOrderId: uuid("work_order_id")
+      .notNull()
+      .references(() => workOrders.id, { onDelete: "cascade" }),
+    /** Check id → passed; the ids are the shared test-run list's. */
+    checks: jsonb("checks").$type<Record<string, boolean>>().notNull(),
+    passed: boolean("passed").notNull(),
+    note: text("note").notNull().default(""),
+    userId: text("user_id").references(() => users.id, { onDelete: "set null" }),
+    at: at("at").notNull().defaultNow(),
+  },
+  (t) => [index("work_order_test_runs_order_idx").on(t.workOrderId, t.at)],
+);
+
 export const attachments = pgTable(
   "attachments",
   {
@@ -115,4 +133,5 @@ export const attachments = pgTable(
 export type CustomerRow = typeof customers.$inferSelect;
 export type UnitRow = typeof units.$inferSelect;
 export type WorkOrderRow = typeof workOrders.$inferSelect;
+export type WorkOrderTestRunRow = typeof workOrderTestRuns.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;

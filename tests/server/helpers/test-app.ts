@@ -61,6 +61,9 @@ export async function createTestApp(envOverrides: Record<string, string> = {}): 
     ctx,
     handle,
     agent: () => request.agent(app).set("Host", HOST).set("Origin", ORIGIN),
-    close: drop,
+    close: async () => {
+      await ctx.mail.close();
+      await drop();
+    },
   };
 }
