@@ -3,6 +3,7 @@ import { existsSync } from "node:fs";
 import express, { type Express, type RequestHandler } from "express";
 import helmet from "helmet";
 import { pinoHttp } from "pino-http";
+import { redactTokenInUrl } from "./lib/redact-url.ts";
 import { v7 as uuidv7 } from "uuid";
 import type { AppContext } from "./context.ts";
 import { loadSession } from "./auth/middleware.ts";
@@ -63,7 +64,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
       },
       autoLogging: { ignore: (req) => req.url === "/api/health" },
       serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: redactTokenInUrl(req.url) }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),

@@ -35,6 +35,8 @@ const policies: Record<string, Policy> = {
   "review.list_all": (user) => user.role === "shop_lead",
   // The shop's figures over a date range: the shop lead's alone.
   "insight.read": (user) => user.role === "shop_lead",
+  // What the shop sent and the built-in sink received: the shop lead's.
+  "mail.read": (user) => user.role === "shop_lead",
   // Everyone reads flows; apprentices only published, unretired ones (and never a draft: drafts need flow.edit).
   "flow.read": (user, record) => flowEditorRoles.includes(user.role) || record === null || (record.published === true && record.retired !== true),
   // Create, save drafts, publish, retire, import.

@@ -9,6 +9,7 @@ import { attachmentsRouter } from "./attachments/router.ts";
 import { flowsRouter } from "./flows/router.ts";
 import { reviewRouter } from "./review/router.ts";
 import { insightRouter } from "./insight/router.ts";
+import { mailRouter } from "./mail/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -29,6 +30,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/flows", router: flowsRouter(ctx), ownBodies: true },
     { base: "/api/review", router: reviewRouter(ctx) },
     { base: "/api/insight", router: insightRouter(ctx) },
+    { base: "/api/mail", router: mailRouter(ctx) },
   ];
 }
 

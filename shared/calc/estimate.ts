@@ -136,3 +136,34 @@ export function repairOrReplace(input: { repairCents: number; replacementCents: 
     sentence: `The repair (${money(repairCents)}) is ${shown} % of a new unit (${money(replacementCents)}): ${tail}`,
   };
 }
+
+/** The rates an estimate was written with, copied from the shop's settings when it was started. */
+export interface EstimateRates {
+  labourRateCents: number;
+  diagnosticFeeCents: number;
+  creditDiagnosticFee: boolean;
+  taxRateBasisPoints: number;
+  taxLabour: boolean;
+}
+
+/** One option put to the customer: its parts lines and labour hours. */
+export interface EstimateOptionInput {
+  labourHours: number;
+  parts: { partNumber?: string; description: string; quantity: number; unitPriceCents: number }[];
+}
+
+/**
+ * An option's totals: its parts and labour at the estimate's rates, the diagnostic fee (credited or
+ * not) and tax. Every option carries the fee, so each total is what the customer pays if they pick it.
+ */
+export function optionTotals(rates: EstimateRates, option: EstimateOptionInput): Estimate {
+  return computeEstimate({
+    parts: option.parts.map((p) => ({ description: p.partNumber ? `${p.partNumber} ${p.description}` : p.description, quantity: p.quantity, unitPriceCents: p.unitPriceCents })),
+    labourHours: option.labourHours,
+    labourRateCents: rates.labourRateCents,
+    diagnosticFeeCents: rates.diagnosticFeeCents,
+    creditDiagnosticFee: rates.creditDiagnosticFee,
+    taxRateBasisPoints: rates.taxRateBasisPoints,
+    taxLabour: rates.taxLabour,
+  });
+}

@@ -85,6 +85,13 @@ export const accessMatrix: AccessRow[] = [
   { method: "GET", route: "/api/insight", path: "/api/insight?from=2026-01-01&to=2026-03-31", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
   { method: "GET", route: "/api/insight", path: "/api/insight?from=2026-03-31&to=2026-01-01", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
 
+  // Mail: what the shop sent and what the built-in sink received are the shop lead's.
+  { method: "GET", route: "/api/mail/outgoing", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
+  { method: "GET", route: "/api/mail/outgoing", path: "/api/mail/outgoing?limit=0", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
+  { method: "GET", route: "/api/mail/inbox", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
+  { method: "GET", route: "/api/mail/inbox/:id", path: "/api/mail/inbox/0190f0c0-0000-7000-8000-00000000a001", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
+  { method: "GET", route: "/api/mail/inbox/:id/attachments/:index", path: "/api/mail/inbox/0190f0c0-0000-7000-8000-00000000a001/attachments/0", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
+
   // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
   { method: "GET", route: "/api/flows", expect: signedIn(200) },
   { method: "POST", route: "/api/flows", body: {}, expect: editors(400) },

@@ -7,6 +7,7 @@ import { createMailer } from "../../../server/mail/mailer.ts";
 import { loadEnv } from "../../../server/env.ts";
 import { createLogger } from "../../../server/lib/logger.ts";
 import { createTestApp, type TestApp } from "../helpers/test-app.ts";
+import { signedInAs } from "../helpers/sign-in.ts";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -23,9 +24,12 @@ async function closedPort(): Promise<number> {
   return port;
 }
 
+/** A stand-in for the estimate PDF: only its first line matters to these tests. */
+const standInPdf = Buffer.from("%PDF-1.4\n% a tiny stand-in body\n%%EOF\n");
+
 describe("the mailer and the built-in sink", () => {
   it("hands a message to the sink over SMTP and keeps it, attachment and all", async () => {
-    const pdf = Buffer.from("%PDF-1.4\n% a tiny stand-in body\n%%EOF\n");
+    const pdf = standInPdf;
     const outcome = await t.ctx.mail.send({
       kind: "estimate",
       to: "customer@example.com",
@@ -72,5 +76,27 @@ describe("the mailer and the built-in sink", () => {
     } finally {
       await mailer.close();
     }
+  });
+});
+
+describe("the shop lead's mail pages", () => {
+  it("lists what was sent and what the sink received, and gives back the attachment", async () => {
+    const { agent: lead } = await signedInAs(t, "shop_lead");
+    const outgoing = await lead.get("/api/mail/outgoing").expect(200);
+    expect(outgoing.body.messages.map((m: { status: string }) => m.status).sort()).toEqual(["failed", "sent"]);
+    const failed = outgoing.body.messages.find((m: { status: string }) => m.status === "failed");
+    expect(failed.error).toMatch(/refused the connection/);
+
+    const box = await lead.get("/api/mail/inbox").expect(200);
+    expect(box.body.mode).toBe("sink");
+    expect(box.body.messages).toHaveLength(1);
+    const [message] = box.body.messages;
+    expect(message.attachments).toEqual([{ index: 0, filename: "estimate.pdf", contentType: "application/pdf", size: standInPdf.length }]);
+    const full = await lead.get(`/api/mail/inbox/${message.id}`).expect(200);
+    expect(full.body.html).toContain("<b>words</b>");
+    const file = await lead.get(`/api/mail/inbox/${message.id}/attachments/0`).buffer(true).expect(200);
+    expect(file.headers["content-type"]).toBe("application/pdf");
+    expect(file.headers["content-disposition"]).toBe('attachment; filename="estimate.pdf"');
+    expect(Buffer.from(file.body).toString("latin1")).toMatch(/^%PDF-1\.4/);
   });
 });
