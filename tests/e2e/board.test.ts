@@ -120,6 +120,8 @@ describe("the work-order board", () => {
     for (const group of await section.getByRole("radiogroup").all()) await group.getByText("Yes", { exact: true }).click();
     await section.getByRole("button", { name: "Save the test run" }).click();
     await seen(latest.getByText("Passed"), "the passed run");
+    await seen(section.getByRole("link", { name: "Move it to ready for pick-up on the board" }), "the way on after a pass");
+    expect(await section.getByRole("button", { name: "Save the test run" }).count()).toBe(0);
     const tall = await context.newPage();
     await tall.setViewportSize(viewports.portrait);
     await tall.goto(`${server.url}/work-orders/${id}`);
@@ -155,6 +157,7 @@ describe("shop settings", () => {
     const message = "“XYZ” is not an ISO 4217 currency code. Use three letters such as USD, EUR or CAD.";
     await seen(page.locator("#settings-currency-error").getByText(message), "the currency's message beside it");
     expect(await currency.getAttribute("aria-invalid")).toBe("true");
+    await page.evaluate(() => document.getElementById("settings-currency")?.scrollIntoView({ block: "center" }));
     await snap(page, "settings-currency-refused-landscape");
     let stored = (await (await page.request.get(`${server.url}/api/settings`)).json()) as SettingsResponse;
     expect(stored.currency).toBe("USD");

@@ -62,13 +62,13 @@ export function BoardPage({ canMove }: { canMove: boolean }) {
         <p className="text-ink-muted">Loading the board…</p>
       ) : (
         <>
-          <nav aria-label="Jump to a state" className="flex flex-wrap gap-2">
+          <nav aria-label="Jump to a state" className="-mx-1 flex gap-2 overflow-x-auto px-1 pb-1">
             {board.data.columns.map((column) => (
               <button
                 key={column.state}
                 type="button"
                 onClick={() => jumpTo(column.state)}
-                className="inline-flex min-h-12 items-center gap-2 rounded-full border-2 border-line-strong bg-raised px-4 text-base font-semibold"
+                className="inline-flex min-h-12 shrink-0 items-center gap-2 rounded-full border-2 border-line-strong bg-raised px-4 text-base font-semibold whitespace-nowrap"
               >
                 {stateLabel(column.state)}
                 <span className="tabular-figures rounded-full bg-sunken px-2">{column.total}</span>
@@ -79,7 +79,7 @@ export function BoardPage({ canMove }: { canMove: boolean }) {
             role="region"
             aria-label="Board: scroll sideways for more states"
             tabIndex={0}
-            className="max-h-[calc(100dvh-10rem)] min-h-[26rem] overflow-auto overscroll-contain rounded-xl border-2 border-line focus-visible:outline-3 focus-visible:outline-focus"
+            className="max-h-[calc(100dvh-18rem)] min-h-[24rem] overflow-auto overscroll-contain rounded-xl border-2 border-line focus-visible:outline-3 focus-visible:outline-focus"
           >
             <div className="flex w-max items-start gap-3 p-2">
               {board.data.columns.map((column) => (

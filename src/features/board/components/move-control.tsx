@@ -2,8 +2,7 @@ import { useId, useState } from "react";
 import { allowedMoves } from "../../../../shared/work-orders/moves.ts";
 import type { WorkOrderState } from "../../../../shared/schemas/work-orders.ts";
 import { Button } from "../../../components/ui/button.tsx";
-import { StatePill } from "../../../components/ui/state-pill.tsx";
-import { stateLabel, stateShapes } from "../lib/board-words.ts";
+import { stateLabel } from "../lib/board-words.ts";
 
 interface MoveControlProps {
   number: string;
@@ -36,16 +35,23 @@ export function MoveControl({ number, state, busy, onMove }: MoveControlProps) {
             setOpen(false);
             onMove(to);
           }}
-          className="flex min-h-12 items-center rounded-lg border-2 border-line-strong bg-raised px-2 text-left disabled:opacity-60"
+          className="flex min-h-12 items-center gap-2 rounded-lg border-2 border-line-strong bg-raised px-3 text-left font-semibold disabled:border-dashed disabled:text-ink-muted"
         >
-          <StatePill shape={stateShapes[to]} className="border-0 bg-transparent">
-            {stateLabel(to)}
-          </StatePill>
+          <ArrowGlyph />
+          {stateLabel(to)}
         </button>
       ))}
       <Button variant="quiet" onClick={() => setOpen(false)}>
         Cancel
       </Button>
     </div>
+  );
+}
+
+function ArrowGlyph() {
+  return (
+    <svg viewBox="0 0 24 24" className="size-6 shrink-0" aria-hidden="true" focusable="false">
+      <path d="M4 12h14M13 6l6 6-6 6" fill="none" strokeWidth="2.6" strokeLinecap="round" strokeLinejoin="round" className="stroke-accent" />
+    </svg>
   );
 }

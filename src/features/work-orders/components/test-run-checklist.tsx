@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { Link } from "react-router";
 import { failedChecks, testRunCheckIds, testRunCheckQuestions, type TestRunCheckId } from "../../../../shared/work-orders/moves.ts";
 import type { TestRun } from "../../../../shared/schemas/test-runs.ts";
 import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
@@ -30,9 +31,28 @@ export function TestRunChecklist({ workOrder }: { workOrder: WorkOrderDetail }) 
         Test run
       </h2>
       {latest && <LatestRun run={latest} />}
-      {inTestRun ? <TestRunForm key={latest?.id ?? "first"} workOrderId={workOrder.id} /> : null}
+      {inTestRun && <NextRun key={latest?.id ?? "first"} workOrderId={workOrder.id} passed={latest?.passed === true} />}
     </section>
   );
+}
+
+// After a pass the unit is ready to go out: the form folds away unless another run is wanted.
+function NextRun({ workOrderId, passed }: { workOrderId: string; passed: boolean }) {
+  const [again, setAgain] = useState(false);
+  if (passed && !again)
+    return (
+      <div className="flex flex-col items-start gap-3">
+        <p role="status">
+          Passed.{" "}
+          <Link to="/work-orders/board" className="font-semibold text-accent underline decoration-2 underline-offset-4">
+            Move it to ready for pick-up on the board
+          </Link>
+          .
+        </p>
+        <Button onClick={() => setAgain(true)}>Record another test run</Button>
+      </div>
+    );
+  return <TestRunForm workOrderId={workOrderId} />;
 }
 
 function LatestRun({ run }: { run: TestRun }) {
@@ -120,7 +140,7 @@ function TestRunForm({ workOrderId }: { workOrderId: string }) {
       ))}
       {missing.length === 0 && testRunCheckIds.some((id) => answers[id] === "no") && (
         <p className="font-semibold">
-          {testRunCheckIds.filter((id) => answers[id] === "no").length} failed: this test run will be saved as failed.
+          {testRunCheckIds.filter((id) => answers[id] === "no").length} answered No: this test run will be saved as failed.
         </p>
       )}
       <TextArea id="test-run-note" label="Note" hint="Optional: what you saw, in a few words." value={note} maxLength={1000} onChange={(event) => setNote(event.currentTarget.value)} />
