@@ -2,7 +2,7 @@ import js from "@eslint/js";
 import tseslint from "typescript-eslint";
 import reactHooks from "eslint-plugin-react-hooks";
 
-const features = ["auth", "bench", "work-orders", "session", "flows", "review", "insight", "estimates", "settings", "users", "calculators", "home"];
+const features = ["auth", "bench", "work-orders", "session", "flows", "review", "insight", "estimates", "settings", "users", "calculators", "home", "board"];
 
 export default tseslint.config(
   { ignores: ["dist/**", "node_modules/**", "data/**", "data-load/**", "artifacts/**", "coverage/**", "drizzle/**"] },

@@ -10,6 +10,8 @@ import { flowsRouter } from "./flows/router.ts";
 import { reviewRouter } from "./review/router.ts";
 import { insightRouter } from "./insight/router.ts";
 import { mailRouter } from "./mail/router.ts";
+import { boardRouter } from "./board/router.ts";
+import { settingsRouter } from "./settings/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -23,6 +25,8 @@ export function apiResources(ctx: AppContext): ApiResource[] {
   return [
     { base: "/api/health", router: healthRouter(ctx) },
     { base: "/api/auth", router: authRouter(ctx) },
+    // Ahead of the work-orders router, whose /:id would otherwise take /board.
+    { base: "/api/work-orders", router: boardRouter(ctx) },
     { base: "/api/work-orders", router: workOrdersRouter(ctx) },
     { base: "/api/sessions", router: sessionsRouter(ctx) },
     { base: "/api/bench", router: benchRouter(ctx) },
@@ -31,6 +35,7 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/review", router: reviewRouter(ctx) },
     { base: "/api/insight", router: insightRouter(ctx) },
     { base: "/api/mail", router: mailRouter(ctx) },
+    { base: "/api/settings", router: settingsRouter(ctx) },
   ];
 }
 

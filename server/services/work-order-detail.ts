@@ -4,6 +4,7 @@ import { customers, diagnosticSessions, flows, flowVersions, units, users, workO
 import { notFound } from "../lib/errors.ts";
 import { appliesToUnit, compiledVersion, publishedFlows } from "./flows.ts";
 import { summaryColumns, toSummary } from "./work-orders.ts";
+import { latestTestRun } from "./board.ts";
 import type { WorkOrderDetail } from "../../shared/schemas/work-orders.ts";
 
 export async function findWorkOrder(ctx: Pick<AppContext, "db">, id: string) {
@@ -57,5 +58,6 @@ export async function getWorkOrderDetail(ctx: Pick<AppContext, "db">, id: string
     applicableFlows: published
       .filter((f) => appliesToUnit(f.appliesTo, row.unit))
       .map((f) => ({ flowId: f.flowId, title: f.title, summary: f.summary, version: f.version })),
+    latestTestRun: await latestTestRun(ctx, id),
   };
 }

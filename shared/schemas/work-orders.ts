@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { compressionReleaseValues, equipmentKinds } from "../equipment.ts";
+import { testRunSchema } from "./test-runs.ts";
 
 export const workOrderStates = [
   "waiting_for_diagnosis",
@@ -119,6 +120,8 @@ export const workOrderDetailSchema = workOrderSummarySchema.extend({
   ),
   /** Published flows whose equipment kinds and cycle fit this unit. */
   applicableFlows: z.array(z.object({ flowId: z.string(), title: z.string(), summary: z.string(), version: z.number().int() })),
+  /** The newest test run after a repair, if one was recorded. */
+  latestTestRun: testRunSchema.nullable().optional(),
 });
 export type WorkOrderDetail = z.infer<typeof workOrderDetailSchema>;
 

@@ -55,6 +55,7 @@ function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteO
     "work-orders": [
       { index: true, lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderListRoute })) },
       { path: "new", lazy: () => workOrders().then((module) => ({ Component: module.IntakeRoute })) },
+      { path: "board", lazy: () => import("./routes/board.tsx").then((module) => ({ Component: module.BoardRoute })) },
       {
         path: ":workOrderId",
         loader: workOrderLoader(queryClient),

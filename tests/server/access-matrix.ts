@@ -50,6 +50,11 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/work-orders/:id/sessions", path: (f) => `/api/work-orders/${f.workOrderId}/sessions`, body: {}, expect: signedIn(400) },
   // Without a file: every role gets past the policy to the missing photo.
   { method: "POST", route: "/api/work-orders/:id/intake-photo", path: (f) => `/api/work-orders/${f.workOrderId}/intake-photo`, expect: signedIn(400) },
+  // The board: everyone reads it; the intake roles move tickets and record test runs (an empty body stops at validation).
+  { method: "GET", route: "/api/work-orders/board", expect: signedIn(200) },
+  { method: "POST", route: "/api/work-orders/:id/moves", path: (f) => `/api/work-orders/${f.workOrderId}/moves`, body: {}, expect: signedIn(400) },
+  { method: "POST", route: "/api/work-orders/:id/moves", path: (f) => `/api/work-orders/${f.workOrderId}/moves`, body: { to: "picked_up", expectedFrom: "waiting_for_diagnosis" }, expect: signedIn(409) },
+  { method: "POST", route: "/api/work-orders/:id/test-runs", path: (f) => `/api/work-orders/${f.workOrderId}/test-runs`, body: {}, expect: signedIn(400) },
 
   { method: "GET", route: "/api/sessions/:id", path: (f, who) => `/api/sessions/${own(f, who)}`, expect: signedIn(200) },
   { method: "GET", route: "/api/sessions/:id", path: (f) => `/api/sessions/${f.foreignSessionId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
@@ -91,6 +96,10 @@ export const accessMatrix: AccessRow[] = [
   { method: "GET", route: "/api/mail/inbox", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
   { method: "GET", route: "/api/mail/inbox/:id", path: "/api/mail/inbox/0190f0c0-0000-7000-8000-00000000a001", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
   { method: "GET", route: "/api/mail/inbox/:id/attachments/:index", path: "/api/mail/inbox/0190f0c0-0000-7000-8000-00000000a001/attachments/0", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
+
+  // Shop settings: everyone signed in reads them; only the shop lead changes them (and gets as far as validation).
+  { method: "GET", route: "/api/settings", expect: signedIn(200) },
+  { method: "PUT", route: "/api/settings", body: {}, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
 
   // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
   { method: "GET", route: "/api/flows", expect: signedIn(200) },

@@ -1,7 +1,5 @@
-import { LaterReleasePanel } from "../../components/ui/later-release-panel.tsx";
-import { areas } from "../areas.ts";
+import { SettingsPage } from "../../features/settings/components/settings-page.tsx";
 
 export function Component() {
-  const { label, summary } = areas["settings"];
-  return <LaterReleasePanel title={label} summary={summary} />;
+  return <SettingsPage />;
 }

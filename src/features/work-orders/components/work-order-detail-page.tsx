@@ -10,6 +10,7 @@ import { IntakePhoto } from "./intake-photo.tsx";
 import { SessionList } from "./session-list.tsx";
 import { StartCheck } from "./start-check.tsx";
 import { StateLabel } from "./state-label.tsx";
+import { TestRunChecklist } from "./test-run-checklist.tsx";
 import { WorkOrderFacts } from "./work-order-facts.tsx";
 
 export function WorkOrderDetailPage() {
@@ -46,6 +47,7 @@ export function WorkOrderDetailPage() {
       )}
       <div className="grid gap-8 landscape:grid-cols-2">
         <div className="flex flex-col gap-8 landscape:order-2">
+          <TestRunChecklist workOrder={workOrder} />
           <StartCheck workOrder={workOrder} />
           <SessionList sessions={workOrder.sessions} />
         </div>

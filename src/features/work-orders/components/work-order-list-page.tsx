@@ -48,6 +48,7 @@ export function WorkOrderListPage() {
     <div className="flex max-w-5xl flex-col gap-6">
       <div className="flex flex-wrap items-center justify-between gap-4">
         <h1 className="text-step font-semibold">Work orders</h1>
+        <Link to="/work-orders/board" className="inline-flex min-h-12 items-center font-semibold text-accent underline decoration-2 underline-offset-4">Board view</Link>
         <Link to="/work-orders/new" className={buttonClasses({ variant: "primary", size: "main" })}>
           <PlusGlyph />
           Check in a unit
