@@ -10,6 +10,8 @@ import { flowsRouter } from "./flows/router.ts";
 import { reviewRouter } from "./review/router.ts";
 import { insightRouter } from "./insight/router.ts";
 import { mailRouter } from "./mail/router.ts";
+import { usersRouter } from "./users/router.ts";
+import { passwordLinksRouter } from "./password-links/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -31,6 +33,8 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/review", router: reviewRouter(ctx) },
     { base: "/api/insight", router: insightRouter(ctx) },
     { base: "/api/mail", router: mailRouter(ctx) },
+    { base: "/api/users", router: usersRouter(ctx) },
+    { base: "/api/public/password-links", router: passwordLinksRouter(ctx) },
   ];
 }
 
