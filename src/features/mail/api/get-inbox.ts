@@ -9,5 +9,5 @@ export function getInbox(signal?: AbortSignal) {
 }
 
 export function inboxQueryOptions() {
-  return queryOptions({ queryKey: mailKeys.inbox(), queryFn: ({ signal }) => getInbox(signal), staleTime: 15_000 });
+  return queryOptions({ queryKey: mailKeys.inbox(), queryFn: ({ signal }) => getInbox(signal), staleTime: 0 });
 }

@@ -15,5 +15,5 @@ export function listOutgoing(signal?: AbortSignal) {
 }
 
 export function outgoingQueryOptions() {
-  return queryOptions({ queryKey: mailKeys.outgoing(), queryFn: ({ signal }) => listOutgoing(signal), staleTime: 15_000 });
+  return queryOptions({ queryKey: mailKeys.outgoing(), queryFn: ({ signal }) => listOutgoing(signal), staleTime: 0 });
 }

@@ -16,7 +16,7 @@ export function OutgoingTable({ messages }: { messages: OutgoingMail[] }) {
         <caption className="sr-only">Mail the shop sent, newest first</caption>
         <thead>
           <tr className="border-b-2 border-line-strong bg-sunken">
-            {["When", "To", "Subject", "Kind", "How it went"].map((h) => (
+            {["When", "Message", "Kind", "How it went"].map((h) => (
               <th key={h} scope="col" className="px-4 py-3 text-base font-semibold whitespace-nowrap">
                 {h}
               </th>
@@ -29,10 +29,10 @@ export function OutgoingTable({ messages }: { messages: OutgoingMail[] }) {
             return (
               <tr key={m.id} className="border-b border-line align-top last:border-b-0">
                 <td className="px-4 py-3 whitespace-nowrap tabular-figures">{localDayTime(m.createdAt)}</td>
-                <th scope="row" className="px-4 py-3 font-medium break-all">
-                  {m.to}
+                <th scope="row" className="min-w-56 px-4 py-3 text-left font-normal">
+                  <span className="block font-semibold">{m.subject}</span>
+                  <span className="block text-base text-ink-muted [overflow-wrap:anywhere]">To {m.to}</span>
                 </th>
-                <td className="min-w-48 px-4 py-3">{m.subject}</td>
                 <td className="px-4 py-3 whitespace-nowrap">{kindWords[m.kind]}</td>
                 <td className="min-w-40 px-4 py-3">
                   <StatePill shape={status.shape}>{status.label}</StatePill>

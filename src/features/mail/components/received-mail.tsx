@@ -27,7 +27,7 @@ export function ReceivedMail({ messages, chosen, onChoose }: ReceivedMailProps) 
                 className={"flex min-h-12 w-full flex-col gap-0.5 rounded-lg border-2 px-4 py-2 text-left " + (on ? "border-accent bg-accent-soft" : "border-line-strong bg-raised")}
               >
                 <span className="font-semibold">{m.subject || "(no subject)"}</span>
-                <span className="text-base break-all text-ink-muted">
+                <span className="text-base [overflow-wrap:anywhere] text-ink-muted">
                   To {m.to.join(", ")} · {localDayTime(m.receivedAt)}
                   {m.attachments.length > 0 && ` · ${m.attachments.length} ${m.attachments.length === 1 ? "attachment" : "attachments"}`}
                 </span>
@@ -52,7 +52,7 @@ function MessageView({ id }: { id: string }) {
         <h3 id="message-subject" className="text-xl font-semibold">
           {m.subject || "(no subject)"}
         </h3>
-        <p className="text-base break-all text-ink-muted">
+        <p className="text-base [overflow-wrap:anywhere] text-ink-muted">
           From {m.from} to {m.to.join(", ")}, received {localDayTime(m.receivedAt)}
         </p>
       </div>

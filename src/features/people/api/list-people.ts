@@ -12,5 +12,5 @@ export function listPeople(signal?: AbortSignal) {
 }
 
 export function peopleQueryOptions() {
-  return queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => listPeople(signal) });
+  return queryOptions({ queryKey: peopleKeys.list(), queryFn: ({ signal }) => listPeople(signal), staleTime: 0 });
 }

@@ -62,10 +62,10 @@ export function InviteForm({ onInvited }: { onInvited: (result: InviteResponse) 
             </option>
           ))}
         </SelectField>
+        <Button type="submit" variant="primary" disabled={invite.isPending} className="self-end justify-self-start md:min-h-14">
+          {invite.isPending ? "Sending the invitation…" : "Send the invitation"}
+        </Button>
       </div>
-      <Button type="submit" variant="primary" disabled={invite.isPending} className="self-start">
-        {invite.isPending ? "Sending the invitation…" : "Send the invitation"}
-      </Button>
     </form>
   );
 }

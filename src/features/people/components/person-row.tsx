@@ -41,19 +41,19 @@ export function PersonRow({ person, isMe, onResend, resending, onOwnChange }: Pe
 
   return (
     <li className="flex flex-col gap-3 rounded-xl border-2 border-line bg-raised px-5 py-4" aria-label={person.name}>
-      <div className="flex flex-wrap items-start justify-between gap-x-6 gap-y-3">
+      <div className="grid items-start gap-x-6 gap-y-3 md:grid-cols-[minmax(0,1fr)_auto]">
         <div className="flex min-w-0 flex-col gap-1">
           <p className="text-xl font-semibold">
             {person.name}
             {isMe && <span className="ml-2 text-base font-medium text-ink-muted">(you)</span>}
           </p>
-          <p className="break-all text-ink-muted">{person.email}</p>
+          <p className="text-ink-muted [overflow-wrap:anywhere]">{person.email}</p>
           <div className="mt-1 flex flex-wrap items-center gap-x-4 gap-y-2 text-base">
             <StatePill shape={status.shape}>{status.label}</StatePill>
             <span className="text-ink-muted">{dates(person)}</span>
           </div>
         </div>
-        <div className="flex flex-wrap items-end gap-3">
+        <div className="flex flex-wrap items-end gap-3 md:justify-end">
           <div className="flex flex-col gap-1">
             <label htmlFor={`role-${person.id}`} className="text-base font-semibold">
               Role
