@@ -65,7 +65,7 @@ function MessageView({ id }: { id: string }) {
       ) : null}
       <section aria-label="Text part" className="flex flex-col gap-2">
         <h4 className="font-semibold">Plain text</h4>
-        <pre className="max-h-72 overflow-auto rounded-lg border-2 border-line bg-sunken px-4 py-3 font-sans text-base whitespace-pre-wrap">{m.text || "(no text part)"}</pre>
+        <pre className="max-h-72 overflow-auto rounded-lg border-2 border-line bg-sunken px-4 py-3 font-sans text-base whitespace-pre-wrap [overflow-wrap:anywhere]">{m.text || "(no text part)"}</pre>
       </section>
       {m.attachments.length > 0 && (
         <section aria-label="Attachments" className="flex flex-col gap-2">
