@@ -113,7 +113,7 @@ for (const [orientation, viewport] of Object.entries(viewports)) {
       await seen(welcome.getByText(name, { exact: true }), "the new person's name in the header");
 
       // Their own units: saved to their account.
-      const metric = welcome.getByRole("group", { name: "My units" }).getByRole("button", { name: /Metric/ });
+      const metric = welcome.getByRole("group", { name: "Measurement system" }).getByRole("button", { name: /Metric/ });
       await metric.click();
       await expect.poll(() => metric.getAttribute("aria-pressed")).toBe("true");
       await expect.poll(async () => ((await (await welcome.request.get(`${server.url}/api/auth/me`)).json()) as { user: { unitSystem: string } }).user.unitSystem).toBe("metric");

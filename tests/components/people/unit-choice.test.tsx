@@ -10,7 +10,7 @@ describe("each person's units", () => {
     const fetchMock = stubApi(meAnswers(me), answer({ url: "/api/users", method: "GET" }, () => json({ people: [] })), answer({ url: "/api/auth/me/units", method: "PUT" }, () => json({ user: { ...me.user, unitSystem: "metric" } })));
     const { queryClient } = renderApp("/people");
     const user = userEvent.setup();
-    const group = await screen.findByRole("group", { name: "My units" });
+    const group = await screen.findByRole("group", { name: "Measurement system" });
     expect(within(group).getByRole("button", { name: /Imperial/ })).toHaveAttribute("aria-pressed", "true");
     await user.click(within(group).getByRole("button", { name: /Metric/ }));
     await expect.poll(() => within(group).getByRole("button", { name: /Metric/ }).getAttribute("aria-pressed")).toBe("true");

@@ -12,7 +12,7 @@ export function UnitChoice({ value }: { value: UnitSystem }) {
   const shown = setUnits.isPending ? setUnits.variables.unitSystem : value;
   return (
     <div className="flex flex-col items-end gap-1">
-      <div role="group" aria-label="My units" className="flex items-center gap-2">
+      <div role="group" aria-label="Measurement system" className="flex items-center gap-2">
         <span className="text-base font-medium text-ink-muted" aria-hidden="true">
           Units
         </span>
