@@ -12,6 +12,8 @@ import { insightRouter } from "./insight/router.ts";
 import { mailRouter } from "./mail/router.ts";
 import { boardRouter } from "./board/router.ts";
 import { settingsRouter } from "./settings/router.ts";
+import { usersRouter } from "./users/router.ts";
+import { passwordLinksRouter } from "./password-links/router.ts";
 
 export interface ApiResource {
   base: string;
@@ -36,6 +38,8 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/insight", router: insightRouter(ctx) },
     { base: "/api/mail", router: mailRouter(ctx) },
     { base: "/api/settings", router: settingsRouter(ctx) },
+    { base: "/api/users", router: usersRouter(ctx) },
+    { base: "/api/public/password-links", router: passwordLinksRouter(ctx) },
   ];
 }
 

@@ -90,6 +90,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       ErrorBoundary: RootProblem,
       children: [
         { path: "sign-in", loader: signInLoader(queryClient), lazy: () => import("./routes/sign-in.tsx") },
+        { path: "welcome/:token", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.PasswordLinkRoute })) },
+        { path: "reset-password/:token", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.PasswordLinkRoute })) },
+        { path: "forgot-password", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.ForgotPasswordRoute })) },
         {
           loader: signedInLoader(queryClient),
           lazy: () => import("./layout/app-shell.tsx").then((module) => ({ Component: module.AppShell })),
@@ -99,6 +102,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, loader: homeLoader(queryClient) },
                 ...areaIds.map((id) => areaRoute(queryClient, id)),
+                { path: "people/mail", loader: areaLoader(queryClient, "people"), lazy: () => import("./routes/people-mail.tsx") },
                 { path: "*", Component: NotFound },
               ],
             },

@@ -100,6 +100,16 @@ export const accessMatrix: AccessRow[] = [
   // Shop settings: everyone signed in reads them; only the shop lead changes them (and gets as far as validation).
   { method: "GET", route: "/api/settings", expect: signedIn(200) },
   { method: "PUT", route: "/api/settings", body: {}, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
+  // People: the shop lead's; a tech is refused before the body is read. Each person sets their own units.
+  { method: "GET", route: "/api/users", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 200 } },
+  { method: "POST", route: "/api/users/invites", body: {}, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 400 } },
+  { method: "POST", route: "/api/users/:id/invites", path: "/api/users/0190f0c0-0000-7000-8000-00000000b001/invites", expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
+  { method: "PATCH", route: "/api/users/:id", path: "/api/users/0190f0c0-0000-7000-8000-00000000b001", body: { role: "apprentice" }, expect: { anonymous: 401, apprentice: 403, senior_tech: 403, shop_lead: 404 } },
+  { method: "PUT", route: "/api/auth/me/units", body: {}, expect: signedIn(400) },
+  // Public: the same answer for everyone, signed in or not.
+  { method: "POST", route: "/api/auth/password-resets", body: { email: "nobody@bench.test" }, expect: everyone(202) },
+  { method: "GET", route: "/api/public/password-links/:token", path: "/api/public/password-links/not-a-link-benchpath-sent-000", expect: everyone(404) },
+  { method: "POST", route: "/api/public/password-links/:token", path: "/api/public/password-links/not-a-link-benchpath-sent-000", body: { password: "long-enough-password" }, expect: everyone(404) },
 
   // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
   { method: "GET", route: "/api/flows", expect: signedIn(200) },

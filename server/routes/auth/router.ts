@@ -5,12 +5,16 @@ import { HttpError } from "../../lib/errors.ts";
 import { currentUser, requireUser } from "../../auth/middleware.ts";
 import { authorize } from "../../auth/policies.ts";
 import { clearSessionCookie, setSessionCookie } from "../../auth/cookies.ts";
-import { signInThrottle } from "../../auth/throttle.ts";
+import { passwordResetThrottle, signInThrottle } from "../../auth/throttle.ts";
 import { signIn, signOut } from "../../services/auth.ts";
 import { changePassword } from "../../services/users.ts";
 import { getShopName } from "../../services/settings.ts";
 import { changePasswordRequestSchema, signInRequestSchema, type MeResponse } from "../../../shared/schemas/auth.ts";
 import type { z } from "zod";
+import { publicBaseUrl } from "../../lib/public-url.ts";
+import { setOwnUnits } from "../../services/people.ts";
+import { requestPasswordReset } from "../../services/password-links.ts";
+import { passwordResetRequestSchema, unitChoiceRequestSchema } from "../../../shared/schemas/people.ts";
 
 export function authRouter(ctx: AppContext): Router {
   const router = Router();
@@ -42,6 +46,19 @@ export function authRouter(ctx: AppContext): Router {
     await changePassword(ctx, user.id, currentPassword, newPassword);
     clearSessionCookie(req, res, ctx.env.COOKIE_SECURE);
     res.status(204).end();
+  });
+
+  router.put("/me/units", requireUser, validate({ body: unitChoiceRequestSchema }), async (req: Request, res: Response) => {
+    const user = currentUser(res);
+    const { unitSystem } = req.body as z.output<typeof unitChoiceRequestSchema>;
+    res.json({ user: await setOwnUnits(ctx, user.id, unitSystem) });
+  });
+
+  // The same answer, at once, for every address: whether a link goes out is never told, not even by timing.
+  router.post("/password-resets", ...passwordResetThrottle(), validate({ body: passwordResetRequestSchema }), (req: Request, res: Response) => {
+    const { email } = req.body as z.output<typeof passwordResetRequestSchema>;
+    requestPasswordReset(ctx, email, publicBaseUrl(req, ctx.env), req.ip).catch((error: unknown) => ctx.logger.error({ err: error }, "password reset not sent"));
+    res.status(202).json({ message: "If that address belongs to someone here, a link is on its way." });
   });
 
   return router;

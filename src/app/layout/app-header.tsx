@@ -5,6 +5,7 @@ import { Button } from "../../components/ui/button.tsx";
 import { FormProblem } from "../../components/ui/form-message.tsx";
 import { Wordmark } from "../../components/ui/wordmark.tsx";
 import { useSignOut } from "../../features/auth/api/sign-out.ts";
+import { UnitChoice } from "../../features/auth/components/unit-choice.tsx";
 import { ContrastToggle } from "./contrast-toggle.tsx";
 
 export function AppHeader({ me }: { me: MeResponse }) {
@@ -29,6 +30,7 @@ export function AppHeader({ me }: { me: MeResponse }) {
             <span className="truncate font-semibold">{me.user.name}</span>
             <span className="text-base text-ink-muted">{roleLabels[me.user.role]}</span>
           </p>
+          <UnitChoice value={me.user.unitSystem} />
           <ContrastToggle />
           <Button onClick={onSignOut} disabled={signOut.isPending}>
             {signOut.isPending ? "Signing out…" : "Sign out"}

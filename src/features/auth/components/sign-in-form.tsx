@@ -3,6 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { signInRequestSchema, type MeResponse } from "../../../../shared/schemas/auth.ts";
 import { isApiRequestError } from "../../../lib/api-client.ts";
+import { Link } from "react-router";
 import { Button } from "../../../components/ui/button.tsx";
 import { FormProblem } from "../../../components/ui/form-message.tsx";
 import { TextField } from "../../../components/ui/text-field.tsx";
@@ -68,6 +69,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: MeResponse) => voi
       <Button type="submit" variant="primary" size="main" disabled={signIn.isPending} className="mt-2 w-full">
         {signIn.isPending ? "Signing in…" : "Sign in"}
       </Button>
+      <Link to="/forgot-password" className="self-start text-lg font-semibold text-accent underline decoration-2 underline-offset-4">
+        Forgot your password?
+      </Link>
     </form>
   );
 }

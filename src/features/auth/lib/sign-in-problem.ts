@@ -23,7 +23,7 @@ export function describeSignInProblem(error: unknown): SignInProblem | null {
     case "invalid_credentials":
       return {
         title: "That e-mail and password do not match an account.",
-        body: "Check both and try again. If you have forgotten your password, ask your shop lead to reset it.",
+        body: "Check both and try again. If you have forgotten your password, choose “Forgot your password?” below.",
       };
     case "too_many_attempts":
       return {

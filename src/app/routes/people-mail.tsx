@@ -1,0 +1,5 @@
+import { SentMailPage } from "../../features/mail/components/sent-mail-page.tsx";
+
+export function Component() {
+  return <SentMailPage />;
+}
