@@ -168,7 +168,7 @@ function estimateOf(source: ReportEstimateSource): ReportEstimate {
         taxableCents,
         taxCents,
         totalCents,
-        approved: source.approvedOptionId === option.id,
+        approved: source.status === "approved" && source.approvedOptionId === option.id,
       };
     }),
   };

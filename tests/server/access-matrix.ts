@@ -50,6 +50,8 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/work-orders/:id/sessions", path: (f) => `/api/work-orders/${f.workOrderId}/sessions`, body: {}, expect: signedIn(400) },
   // Without a file: every role gets past the policy to the missing photo.
   { method: "POST", route: "/api/work-orders/:id/intake-photo", path: (f) => `/api/work-orders/${f.workOrderId}/intake-photo`, expect: signedIn(400) },
+  { method: "GET", route: "/api/work-orders/:id/report", path: (f) => `/api/work-orders/${f.workOrderId}/report`, expect: signedIn(200) },
+  { method: "GET", route: "/api/work-orders/:id/report.pdf", path: (f) => `/api/work-orders/${f.workOrderId}/report.pdf`, expect: signedIn(200) },
 
   { method: "GET", route: "/api/sessions/:id", path: (f, who) => `/api/sessions/${own(f, who)}`, expect: signedIn(200) },
   { method: "GET", route: "/api/sessions/:id", path: (f) => `/api/sessions/${f.foreignSessionId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },
