@@ -24,63 +24,61 @@ export function CustomerReportDocument({ report, paper }: { report: CustomerRepo
           {shop.name} · {workOrder.label}
         </Text>
         <Text style={s.footerRight} fixed render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
-        <View style={s.content}>
-          <View style={s.masthead}>
-            <View style={{ flex: 1, paddingRight: 12 }}>
-              <Text style={s.shopName}>{shop.name}</Text>
-              {shopContact(shop).map((line) => (
-                <Text key={line} style={s.small}>
-                  {line}
-                </Text>
-              ))}
-            </View>
-            <View>
-              <Text style={s.docTitle}>Customer report</Text>
-              <Text style={s.number}>{workOrder.label}</Text>
-              <Text style={[s.small, s.right]}>Received {formatDay(workOrder.receivedAt)}</Text>
-              <Text style={[s.small, s.right]}>Printed {formatDay(report.generatedAt)}</Text>
-            </View>
-          </View>
-
-          <View style={s.facts}>
-            <Fact label="Customer" value={report.customer.name} />
-            <Fact label="Status" value={workOrder.stateLabel} />
-          </View>
-
-          <Text style={s.h2}>The unit: {unitTitle(unit)}</Text>
-          <View style={s.facts}>
-            {unitFacts(unit).map(([label, value]) => (
-              <Fact key={label} label={label} value={value} />
+        <View style={s.masthead}>
+          <View style={{ flex: 1, paddingRight: 12 }}>
+            <Text style={s.shopName}>{shop.name}</Text>
+            {shopContact(shop).map((line) => (
+              <Text key={line} style={s.small}>
+                {line}
+              </Text>
             ))}
           </View>
-
-          <Text style={s.h2}>What you told us</Text>
-          <Text style={s.paragraph}>{report.complaint}</Text>
-
-          <Text style={s.h2} minPresenceAhead={60}>
-            What we found
-          </Text>
-          {report.findings.length === 0 ? (
-            <Text style={s.paragraph}>The checks on this unit are not finished yet.</Text>
-          ) : (
-            report.findings.map((f) => <Finding key={f.sessionId} finding={f} />)
-          )}
-
-          {report.estimate && <Estimate estimate={report.estimate} />}
-
-          <Text style={s.h2} minPresenceAhead={120}>
-            Safety
-          </Text>
-          <Text style={s.paragraph}>{report.safety.intro}</Text>
-          {report.safety.notes.map((note) => (
-            <SafetyPanel key={note.title} note={note} />
-          ))}
-
-          <View wrap={false}>
-            <Text style={s.h2}>Warranty</Text>
-            {report.warranty.shopNote !== "" && <Text style={s.paragraph}>{report.warranty.shopNote}</Text>}
-            <Text style={s.paragraph}>{report.warranty.standardLine}</Text>
+          <View>
+            <Text style={s.docTitle}>Customer report</Text>
+            <Text style={s.number}>{workOrder.label}</Text>
+            <Text style={[s.small, s.right]}>Received {formatDay(workOrder.receivedAt)}</Text>
+            <Text style={[s.small, s.right]}>Printed {formatDay(report.generatedAt)}</Text>
           </View>
+        </View>
+
+        <View style={s.facts}>
+          <Fact label="Customer" value={report.customer.name} />
+          <Fact label="Status" value={workOrder.stateLabel} />
+        </View>
+
+        <Text style={s.h2}>The unit: {unitTitle(unit)}</Text>
+        <View style={s.facts}>
+          {unitFacts(unit).map(([label, value]) => (
+            <Fact key={label} label={label} value={value} />
+          ))}
+        </View>
+
+        <Text style={s.h2}>What you told us</Text>
+        <Text style={s.paragraph}>{report.complaint}</Text>
+
+        <Text style={s.h2} minPresenceAhead={60}>
+          What we found
+        </Text>
+        {report.findings.length === 0 ? (
+          <Text style={s.paragraph}>The checks on this unit are not finished yet.</Text>
+        ) : (
+          report.findings.map((f) => <Finding key={f.sessionId} finding={f} />)
+        )}
+
+        {report.estimate && <Estimate estimate={report.estimate} />}
+
+        <Text style={s.h2} minPresenceAhead={120}>
+          Safety
+        </Text>
+        <Text style={s.paragraph}>{report.safety.intro}</Text>
+        {report.safety.notes.map((note) => (
+          <SafetyPanel key={note.title} note={note} />
+        ))}
+
+        <View wrap={false}>
+          <Text style={s.h2}>Warranty</Text>
+          {report.warranty.shopNote !== "" && <Text style={s.paragraph}>{report.warranty.shopNote}</Text>}
+          <Text style={s.paragraph}>{report.warranty.standardLine}</Text>
         </View>
       </Page>
     </Document>

@@ -30,20 +30,19 @@ const MUTED = "#3d3d3d";
 const RULE = "#6b6b6b";
 
 export const s = StyleSheet.create({
-  // The line height is set on the flowing content, not the page: text drawn by render (the page
-  // numbers) comes out empty when it inherits a line height from the page.
+  // No lineHeight anywhere: this react-pdf resolves it against the wrong size (lines overlap or spread
+  // apart, and the page numbers drawn by render vanish), so the font's own spacing is used.
   page: { fontFamily: FONT_STACK, fontSize: 10, color: INK, paddingTop: 54, paddingBottom: 58, paddingHorizontal: 48 },
-  content: { lineHeight: 1.4 },
   running: { position: "absolute", top: 24, left: 48, right: 48, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: MUTED },
   footerRule: { position: "absolute", bottom: 40, left: 48, right: 48, borderTopWidth: 0.75, borderTopColor: RULE },
   footerLeft: { position: "absolute", bottom: 26, left: 48, fontSize: 8, color: MUTED },
   // Text drawn by render gets no width from one edge alone: both are given.
   footerRight: { position: "absolute", bottom: 26, left: 300, right: 48, textAlign: "right", fontSize: 8, color: MUTED },
   masthead: { flexDirection: "row", justifyContent: "space-between", borderBottomWidth: 2, borderBottomColor: INK, paddingBottom: 10, marginBottom: 14 },
-  shopName: { fontSize: 17, lineHeight: 1.25, fontWeight: 700 },
+  shopName: { fontSize: 17, fontWeight: 700 },
   small: { fontSize: 9, color: MUTED },
-  docTitle: { fontSize: 14, lineHeight: 1.25, fontWeight: 600, textAlign: "right" },
-  number: { fontSize: 17, lineHeight: 1.25, fontWeight: 700, textAlign: "right" },
+  docTitle: { fontSize: 14, fontWeight: 600, textAlign: "right" },
+  number: { fontSize: 17, fontWeight: 700, textAlign: "right" },
   right: { textAlign: "right" },
   h2: { fontSize: 13, fontWeight: 700, marginTop: 14, marginBottom: 6, paddingBottom: 3, borderBottomWidth: 1, borderBottomColor: INK },
   h3: { fontSize: 11, fontWeight: 600, marginTop: 6, marginBottom: 3 },

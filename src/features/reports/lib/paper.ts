@@ -21,10 +21,12 @@ export function printRules(paper: PaperSize) {
   return `
 @page { size: ${pageSizes[paper]}; margin: 14mm 14mm 16mm; }
 @media print {
+  /* The app sizes text in rem: a smaller root brings every size down to paper sizes together. */
+  html { font-size: 9.5pt !important; }
   html, body { background: #fff !important; color: #000 !important; }
   header, nav, a[href="#main"], [data-print="hide"] { display: none !important; }
   main { padding: 0 !important; }
-  .customer-report { max-width: none !important; font-size: 11pt; line-height: 1.4; }
+  .customer-report { max-width: none !important; }
   .customer-report [data-print="sheet"] { border: 0 !important; padding: 0 !important; background: #fff !important; }
   .customer-report [data-print="new-page"] { break-before: page; }
   .customer-report h2, .customer-report h3 { break-after: avoid; }
