@@ -61,6 +61,7 @@ function areaChildren(queryClient: QueryClient): Record<AreaWithChildren, RouteO
         loader: workOrderLoader(queryClient),
         lazy: () => workOrders().then((module) => ({ Component: module.WorkOrderDetailRoute })),
       },
+      { path: ":workOrderId/report", lazy: () => import("./routes/reports.tsx").then((module) => ({ Component: module.CustomerReportRoute })) },
     ],
     flows: [
       { index: true, lazy: () => flows().then((module) => ({ Component: module.FlowListRoute })) },

@@ -55,6 +55,8 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/work-orders/:id/moves", path: (f) => `/api/work-orders/${f.workOrderId}/moves`, body: {}, expect: signedIn(400) },
   { method: "POST", route: "/api/work-orders/:id/moves", path: (f) => `/api/work-orders/${f.workOrderId}/moves`, body: { to: "picked_up", expectedFrom: "waiting_for_diagnosis" }, expect: signedIn(409) },
   { method: "POST", route: "/api/work-orders/:id/test-runs", path: (f) => `/api/work-orders/${f.workOrderId}/test-runs`, body: {}, expect: signedIn(400) },
+  { method: "GET", route: "/api/work-orders/:id/report", path: (f) => `/api/work-orders/${f.workOrderId}/report`, expect: signedIn(200) },
+  { method: "GET", route: "/api/work-orders/:id/report.pdf", path: (f) => `/api/work-orders/${f.workOrderId}/report.pdf`, expect: signedIn(200) },
 
   { method: "GET", route: "/api/sessions/:id", path: (f, who) => `/api/sessions/${own(f, who)}`, expect: signedIn(200) },
   { method: "GET", route: "/api/sessions/:id", path: (f) => `/api/sessions/${f.foreignSessionId}`, expect: { anonymous: 401, apprentice: 404, senior_tech: 200, shop_lead: 200 } },

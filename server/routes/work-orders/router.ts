@@ -11,6 +11,10 @@ import { photoUpload } from "../attachments/upload.ts";
 import { getSessionDetail, startSession } from "../../services/sessions.ts";
 import { createWorkOrderRequestSchema, idParamsSchema, listWorkOrdersQuerySchema, type WorkOrderListResponse } from "../../../shared/schemas/work-orders.ts";
 import { createSessionRequestSchema } from "../../../shared/schemas/sessions.ts";
+import { customerReport } from "../../services/customer-report.ts";
+import { renderReportPdf } from "../../pdf/customer-report-pdf.tsx";
+import { reportFileName } from "../../../shared/report/customer-report.ts";
+import { reportPdfQuerySchema, reportQuerySchema, type ReportPdfQuery, type ReportQuery } from "../../../shared/schemas/report.ts";
 
 type Id = z.output<typeof idParamsSchema>;
 
@@ -53,6 +57,21 @@ export function workOrdersRouter(ctx: AppContext): Router {
     const owner = { type: "work_order" as const, id: (res.locals.params as Id).id, stepId: null };
     const { created: _created, ...photo } = await savePhoto(ctx, currentUser(res), owner, req.file!.buffer);
     res.status(201).json(photo);
+  });
+
+  router.get("/:id/report", requireUser, validate({ params: idParamsSchema, query: reportQuerySchema }), async (_req: Request, res: Response) => {
+    authorize(currentUser(res), "work_order.read");
+    const { estimateId } = res.locals.query as ReportQuery;
+    res.json(await customerReport(ctx, (res.locals.params as Id).id, estimateId));
+  });
+
+  router.get("/:id/report.pdf", requireUser, validate({ params: idParamsSchema, query: reportPdfQuerySchema }), async (_req: Request, res: Response) => {
+    authorize(currentUser(res), "work_order.read");
+    const { estimateId, paper } = res.locals.query as ReportPdfQuery;
+    const report = await customerReport(ctx, (res.locals.params as Id).id, estimateId);
+    const pdf = await renderReportPdf(report, paper);
+    res.set({ "Content-Type": "application/pdf", "Content-Disposition": `inline; filename="${reportFileName(report.workOrder.number)}"`, "Cache-Control": "no-store" });
+    res.send(pdf);
   });
 
   return router;

@@ -76,6 +76,29 @@ export function SafetyPanel(props: SafetyPanelProps) {
   );
 }
 
+/**
+ * The same panel to be read rather than worked through, as in a printed report: nothing to
+ * acknowledge, and the band keeps its colour on paper (the word and the symbol carry it without).
+ */
+export function PrintedSafetyPanel({ signal, title, children }: { signal: SignalWord; title?: string; children: ReactNode }) {
+  const wordId = useId();
+  const { word, band, mark } = bands[signal];
+  return (
+    <section aria-labelledby={wordId} className="break-inside-avoid overflow-hidden rounded-md border-2 border-ink bg-raised">
+      <div className={`flex items-center gap-3 px-5 py-2 [print-color-adjust:exact] ${band}`}>
+        {signal !== "notice" && <SafetyAlertSymbol exclamationClass={mark} />}
+        <span id={wordId} className="text-2xl font-bold tracking-widest">
+          {word}
+        </span>
+      </div>
+      <div className="flex max-w-[70ch] flex-col gap-2 px-5 py-3">
+        {title && <p className="text-xl font-semibold">{title}</p>}
+        <div className="text-base">{children}</div>
+      </div>
+    </section>
+  );
+}
+
 /** Equilateral triangle with an exclamation mark, in the band's text colour. */
 function SafetyAlertSymbol({ exclamationClass }: { exclamationClass: string }) {
   return (

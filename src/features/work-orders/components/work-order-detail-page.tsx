@@ -41,6 +41,9 @@ export function WorkOrderDetailPage() {
           <StateLabel state={workOrder.state} />
           <span>for {workOrder.customer.name}</span>
         </div>
+        <Link to={`/work-orders/${encodeURIComponent(workOrder.id)}/report`} className="inline-flex min-h-12 items-center self-start font-semibold text-accent underline decoration-2 underline-offset-4">
+          Customer report
+        </Link>
       </div>
       {arrival?.photoNotSaved && !workOrder.intakePhotoId && (
         <FormProblem title="Checked in, but the photo of the unit did not save.">Take it again under “As received”.</FormProblem>
