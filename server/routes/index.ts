@@ -10,6 +10,8 @@ import { flowsRouter } from "./flows/router.ts";
 import { reviewRouter } from "./review/router.ts";
 import { insightRouter } from "./insight/router.ts";
 import { mailRouter } from "./mail/router.ts";
+import { estimatesRouter } from "./estimates/router.ts";
+import { publicEstimatesRouter } from "./estimates/public-router.ts";
 
 export interface ApiResource {
   base: string;
@@ -31,6 +33,9 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/review", router: reviewRouter(ctx) },
     { base: "/api/insight", router: insightRouter(ctx) },
     { base: "/api/mail", router: mailRouter(ctx) },
+    { base: "/api/estimates", router: estimatesRouter(ctx) },
+    // The one resource answered without signing in: a customer's estimate by its one-time link.
+    { base: "/api/public/estimates", router: publicEstimatesRouter(ctx) },
   ];
 }
 
