@@ -89,6 +89,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       ErrorBoundary: RootProblem,
       children: [
         { path: "sign-in", loader: signInLoader(queryClient), lazy: () => import("./routes/sign-in.tsx") },
+        // The customer's estimate from the e-mail's link: no sign-in, outside the shop's own screens.
+        { path: "estimate/:token", lazy: () => import("../features/estimates/components/public-estimate-page.tsx").then((module) => ({ Component: module.PublicEstimatePage })) },
         {
           loader: signedInLoader(queryClient),
           lazy: () => import("./layout/app-shell.tsx").then((module) => ({ Component: module.AppShell })),

@@ -1,0 +1,13 @@
+import { queryOptions } from "@tanstack/react-query";
+import { publicEstimateSchema } from "../../../../shared/schemas/estimates.ts";
+import { apiFetch } from "../../../lib/api-client.ts";
+import { estimateKeys } from "./keys.ts";
+
+export function getPublicEstimate(token: string, signal?: AbortSignal) {
+  return apiFetch(`/api/public/estimates/${encodeURIComponent(token)}`, { signal, schema: publicEstimateSchema });
+}
+
+/** The customer's estimate by its link; a used, replaced, expired or unknown link is an answer, not something to retry. */
+export function publicEstimateQueryOptions(token: string) {
+  return queryOptions({ queryKey: estimateKeys.public(token), queryFn: ({ signal }) => getPublicEstimate(token, signal), retry: false, refetchOnWindowFocus: false });
+}
