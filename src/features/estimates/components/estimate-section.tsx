@@ -1,4 +1,5 @@
-import { useQuery, type QueryKey } from "@tanstack/react-query";
+import { useEffect } from "react";
+import { useQuery, useQueryClient, type QueryKey } from "@tanstack/react-query";
 import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
 import { Button } from "../../../components/ui/button.tsx";
 import { FormProblem } from "../../../components/ui/form-message.tsx";
@@ -13,6 +14,14 @@ import { problemWords } from "./problem-words.ts";
 export function EstimateSection({ workOrder, workOrderKey }: { workOrder: WorkOrderDetail; workOrderKey: QueryKey }) {
   const { data, error } = useQuery(estimatesQueryOptions(workOrder.id));
   const create = useCreateEstimate(workOrder.id);
+  const queryClient = useQueryClient();
+  const answered = data?.estimates[0]?.status;
+  // The customer answers from their phone: once the estimate shows it, the work order's state is asked again too.
+  const stale = (answered === "approved" || answered === "declined") && workOrder.state === "waiting_for_approval";
+  const keyText = JSON.stringify(workOrderKey);
+  useEffect(() => {
+    if (stale) void queryClient.invalidateQueries({ queryKey: JSON.parse(keyText) as QueryKey });
+  }, [stale, keyText, queryClient]);
   const finding = [...workOrder.sessions].reverse().find((s) => s.status === "completed" && s.findingTitle);
 
   let body: React.ReactNode;

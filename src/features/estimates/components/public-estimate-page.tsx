@@ -14,14 +14,14 @@ import { PublicPlainPage } from "./public-plain-page.tsx";
 /** The customer's page from the e-mail's link: the shop, the unit, each option with its total, one answer. */
 export function PublicEstimatePage() {
   const { token = "" } = useParams();
-  const { data, error } = useQuery(publicEstimateQueryOptions(token));
+  const { data, error, isFetchedAfterMount } = useQuery(publicEstimateQueryOptions(token));
   const decide = useDecideEstimate(token);
   const [pending, setPending] = useState<Pending | null>(null);
   const [answer, setAnswer] = useState<EstimateDecisionResponse | null>(null);
 
   if (answer) return <ThankYou answer={answer} />;
   if (error) return <LinkProblem error={error} />;
-  if (!data) return <PublicPlainPage title="Opening your estimate…" />;
+  if (!data || !isFetchedAfterMount) return <PublicPlainPage title="Opening your estimate…" />;
 
   const confirm = (comment: string) => {
     if (!pending) return;
