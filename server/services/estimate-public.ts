@@ -56,7 +56,7 @@ export async function publicEstimate(ctx: Pick<AppContext, "db">, token: string)
     validUntil: link.expiresAt.toISOString(),
     options: options.map((option) => {
       const priced = pricedOption(estimate, option);
-      const lines = optionTotals(ratesOf(estimate), option).lines.map(({ description, quantity, unitPriceCents, amountCents }) => ({ description, quantity, unitPriceCents, amountCents }));
+      const lines = optionTotals(ratesOf(estimate), option).lines.map(({ kind, description, quantity, unitPriceCents, amountCents }) => ({ kind, description, quantity, unitPriceCents, amountCents }));
       return { id: option.id, title: option.title, lines, totals: priced.totals, repairOrReplace: priced.repairOrReplace };
     }),
   };

@@ -169,7 +169,7 @@ export const publicEstimateSchema = z.object({
     z.object({
       id: z.string(),
       title: z.string(),
-      lines: z.array(z.object({ description: z.string(), quantity: z.number(), unitPriceCents: z.number().int(), amountCents: z.number().int() })),
+      lines: z.array(z.object({ kind: z.enum(["part", "labour", "diagnostic_fee", "diagnostic_credit"]), description: z.string(), quantity: z.number(), unitPriceCents: z.number().int(), amountCents: z.number().int() })),
       totals: moneyTotalsSchema,
       repairOrReplace: repairOrReplaceSchema.nullable(),
     }),

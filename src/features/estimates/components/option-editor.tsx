@@ -15,7 +15,7 @@ interface OptionEditorProps {
   onRemove?: () => void;
 }
 
-const partColumns = "grid grid-cols-[8rem_minmax(0,1fr)_5.5rem_7.5rem_6.5rem_3rem] items-start gap-2";
+const partColumns = "grid grid-cols-[7rem_minmax(0,1fr)_5rem_6.5rem_5.5rem_3rem] items-start gap-2";
 
 /** One option put to the customer: its name, labour hours and parts lines, and its total as it is typed. */
 export function OptionEditor({ index, option, estimate, replacementPrice, errors, onChange, onRemove }: OptionEditorProps) {

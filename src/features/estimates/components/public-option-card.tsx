@@ -20,7 +20,17 @@ export function PublicOptionCard({ option, number, currency, onApprove }: { opti
             <tr key={i} className="border-b border-line align-top">
               <th scope="row" className="py-2 pr-3 text-left font-normal">
                 {line.description}
-                {line.quantity !== 1 && <span className="block text-ink-muted">{line.quantity} × {money(line.unitPriceCents)}</span>}
+                {line.kind === "labour" ? (
+                  <span className="block text-ink-muted">
+                    {line.quantity} h at {money(line.unitPriceCents)} an hour
+                  </span>
+                ) : (
+                  line.quantity !== 1 && (
+                    <span className="block text-ink-muted">
+                      {line.quantity} × {money(line.unitPriceCents)}
+                    </span>
+                  )
+                )}
               </th>
               <td className="py-2 text-right whitespace-nowrap">{line.amountCents < 0 ? `−${money(-line.amountCents)}` : money(line.amountCents)}</td>
             </tr>
