@@ -148,7 +148,8 @@ describe("an estimate from the bench to the customer's approval", () => {
 
     // The link answers once.
     await phonePage.goto(link!);
-    await seen(phonePage.getByRole("heading", { name: "This estimate has already been answered" }), "the plain page for a used link");
+    await seen(phonePage.getByRole("heading", { name: "Already answered" }), "the plain page for a used link");
+    await seen(phonePage.getByText(/already been answered through this link/), "why the link no longer opens");
     await snap(phonePage, "estimate-public-used-phone");
     expect(customerErrors).toEqual([]);
     await customerContext.close();

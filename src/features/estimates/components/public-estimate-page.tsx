@@ -107,11 +107,11 @@ function ThankYou({ answer }: { answer: EstimateDecisionResponse }) {
 }
 
 const linkProblems: Record<string, string> = {
-  link_used: "This estimate has already been answered",
-  link_revoked: "This link was replaced by a newer e-mail",
-  link_expired: "This estimate has expired",
-  link_closed: "This estimate is no longer open",
-  not_found: "We do not know this link",
+  link_used: "Already answered",
+  link_revoked: "A newer e-mail replaced this link",
+  link_expired: "Past its date",
+  link_closed: "No longer open",
+  not_found: "Link not found",
 };
 
 function LinkProblem({ error }: { error: unknown }) {
