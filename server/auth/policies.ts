@@ -37,6 +37,10 @@ const policies: Record<string, Policy> = {
   "insight.read": (user) => user.role === "shop_lead",
   // What the shop sent and the built-in sink received: the shop lead's.
   "mail.read": (user) => user.role === "shop_lead",
+  // Estimates: every tech and the shop lead read, price and send them (the customer answers by link, without an account).
+  "estimate.read": (user) => benchRoles.includes(user.role),
+  "estimate.edit": (user) => benchRoles.includes(user.role),
+  "estimate.send": (user) => benchRoles.includes(user.role),
   // Everyone reads flows; apprentices only published, unretired ones (and never a draft: drafts need flow.edit).
   "flow.read": (user, record) => flowEditorRoles.includes(user.role) || record === null || (record.published === true && record.retired !== true),
   // Create, save drafts, publish, retire, import.

@@ -14,6 +14,8 @@ import { boardRouter } from "./board/router.ts";
 import { settingsRouter } from "./settings/router.ts";
 import { usersRouter } from "./users/router.ts";
 import { passwordLinksRouter } from "./password-links/router.ts";
+import { estimatesRouter } from "./estimates/router.ts";
+import { publicEstimatesRouter } from "./estimates/public-router.ts";
 
 export interface ApiResource {
   base: string;
@@ -40,6 +42,9 @@ export function apiResources(ctx: AppContext): ApiResource[] {
     { base: "/api/settings", router: settingsRouter(ctx) },
     { base: "/api/users", router: usersRouter(ctx) },
     { base: "/api/public/password-links", router: passwordLinksRouter(ctx) },
+    { base: "/api/estimates", router: estimatesRouter(ctx) },
+    // A customer's estimate by its one-time link: beside sign-in and the password links, the only change made without signing in.
+    { base: "/api/public/estimates", router: publicEstimatesRouter(ctx) },
   ];
 }
 

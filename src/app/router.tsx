@@ -94,6 +94,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         { path: "welcome/:token", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.PasswordLinkRoute })) },
         { path: "reset-password/:token", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.PasswordLinkRoute })) },
         { path: "forgot-password", lazy: () => import("./routes/password-link.tsx").then((module) => ({ Component: module.ForgotPasswordRoute })) },
+        // The customer's estimate from the e-mail's link: no sign-in, outside the shop's own screens.
+        { path: "estimate/:token", lazy: () => import("../features/estimates/components/public-estimate-page.tsx").then((module) => ({ Component: module.PublicEstimatePage })) },
         {
           loader: signedInLoader(queryClient),
           lazy: () => import("./layout/app-shell.tsx").then((module) => ({ Component: module.AppShell })),

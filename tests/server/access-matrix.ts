@@ -34,6 +34,8 @@ const signedIn = (status: number): Record<Who, number> => ({ anonymous: 401, app
 /** Flow editing: senior techs and the shop lead get `status`, an apprentice 403. */
 const editors = (status: number): Record<Who, number> => ({ anonymous: 401, apprentice: 403, senior_tech: status, shop_lead: status });
 const FLOW = "/api/flows/handheld-2-stroke-no-start";
+const NO_ESTIMATE = "0190f0c0-0000-7000-8000-00000000e001";
+const NO_TOKEN = "matrix-token-that-no-link-has-0000000000000";
 
 /** Every /api route, with the status each kind of caller must get. A new route needs a row here. */
 export const accessMatrix: AccessRow[] = [
@@ -112,6 +114,17 @@ export const accessMatrix: AccessRow[] = [
   { method: "POST", route: "/api/auth/password-resets", body: { email: "nobody@bench.test" }, expect: everyone(202) },
   { method: "GET", route: "/api/public/password-links/:token", path: "/api/public/password-links/not-a-link-benchpath-sent-000", expect: everyone(404) },
   { method: "POST", route: "/api/public/password-links/:token", path: "/api/public/password-links/not-a-link-benchpath-sent-000", body: { password: "long-enough-password" }, expect: everyone(404) },
+  // Estimates: every tech and the shop lead price and send them; each gets as far as validation or the missing record.
+  { method: "GET", route: "/api/estimates", path: (f) => `/api/estimates?workOrderId=${f.workOrderId}`, expect: signedIn(200) },
+  { method: "GET", route: "/api/estimates", expect: signedIn(400) },
+  { method: "POST", route: "/api/estimates", body: {}, expect: signedIn(400) },
+  { method: "GET", route: "/api/estimates/:id", path: `/api/estimates/${NO_ESTIMATE}`, expect: signedIn(404) },
+  { method: "PUT", route: "/api/estimates/:id", path: `/api/estimates/${NO_ESTIMATE}`, body: {}, expect: signedIn(400) },
+  { method: "POST", route: "/api/estimates/:id/revise", path: `/api/estimates/${NO_ESTIMATE}/revise`, expect: signedIn(404) },
+  { method: "POST", route: "/api/estimates/:id/send", path: `/api/estimates/${NO_ESTIMATE}/send`, body: {}, expect: signedIn(400) },
+  // The customer's link: open to everyone, the token being the key; an unknown one is 404 for all.
+  { method: "GET", route: "/api/public/estimates/:token", path: `/api/public/estimates/${NO_TOKEN}`, expect: everyone(404) },
+  { method: "POST", route: "/api/public/estimates/:token/decision", path: `/api/public/estimates/${NO_TOKEN}/decision`, body: { decision: "decline" }, expect: everyone(404) },
 
   // Flows: editors get as far as validation (or a missing draft), so nothing changes here.
   { method: "GET", route: "/api/flows", expect: signedIn(200) },

@@ -1,6 +1,7 @@
 import { IntakeForm } from "../../features/work-orders/components/intake-form.tsx";
 import { WorkOrderDetailPage } from "../../features/work-orders/components/work-order-detail-page.tsx";
 import { WorkOrderListPage } from "../../features/work-orders/components/work-order-list-page.tsx";
+import { EstimateSection } from "../../features/estimates/components/estimate-section.tsx";
 
 export function WorkOrderListRoute() {
   return <WorkOrderListPage />;
@@ -11,5 +12,5 @@ export function IntakeRoute() {
 }
 
 export function WorkOrderDetailRoute() {
-  return <WorkOrderDetailPage />;
+  return <WorkOrderDetailPage renderEstimate={(props) => <EstimateSection {...props} />} />;
 }

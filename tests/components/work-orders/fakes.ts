@@ -50,6 +50,9 @@ export function answers(method: string, path: string, answer: (body: unknown, ur
   return ({ url, method: m, body }) => (m === method && url.split("?")[0] === path ? answer(body, url) : undefined);
 }
 
-export function detailAnswers(detail: WorkOrderDetail): FakeRoute {
-  return answers("GET", `/api/work-orders/${detail.id}`, () => json(detail));
+/** The work order, and its estimates (none unless given): the screen asks for both. */
+export function detailAnswers(detail: WorkOrderDetail, estimates: unknown[] = []): FakeRoute {
+  const workOrder = answers("GET", `/api/work-orders/${detail.id}`, () => json(detail));
+  const estimateList = answers("GET", "/api/estimates", () => json({ estimates }));
+  return (request) => workOrder(request) ?? estimateList(request);
 }

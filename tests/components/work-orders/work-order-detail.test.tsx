@@ -39,7 +39,8 @@ describe("a work order's screen", () => {
     const { router } = await openDetail();
     await userEvent.setup().click(screen.getByRole("button", { name: /Handheld 2-stroke no-start/ }));
 
-    await waitFor(() => expect(router.state.location.pathname).toBe("/bench/sessions/se-9"));
+    // The bench screens are a lazy chunk of their own, loaded for the first time here.
+    await waitFor(() => expect(router.state.location.pathname).toBe("/bench/sessions/se-9"), { timeout: 5000 });
     expect(posted).toEqual({ flowId: "handheld-2-stroke" });
   });
 

@@ -1,5 +1,6 @@
-import { useEffect, useRef } from "react";
-import { useQuery } from "@tanstack/react-query";
+import { useEffect, useRef, type ReactNode } from "react";
+import { useQuery, type QueryKey } from "@tanstack/react-query";
+import type { WorkOrderDetail } from "../../../../shared/schemas/work-orders.ts";
 import { Link, useLocation, useParams } from "react-router";
 import { FormProblem } from "../../../components/ui/form-message.tsx";
 import { ScreenProblemText } from "./screen-problem-text.tsx";
@@ -13,7 +14,10 @@ import { StateLabel } from "./state-label.tsx";
 import { TestRunChecklist } from "./test-run-checklist.tsx";
 import { WorkOrderFacts } from "./work-order-facts.tsx";
 
-export function WorkOrderDetailPage() {
+/** The estimate section is drawn by the estimates feature and passed in by the route. */
+export type RenderEstimate = (props: { workOrder: WorkOrderDetail; workOrderKey: QueryKey }) => ReactNode;
+
+export function WorkOrderDetailPage({ renderEstimate }: { renderEstimate?: RenderEstimate } = {}) {
   const { workOrderId = "" } = useParams();
   const arrival = useLocation().state as IntakeArrival | null;
   const { data: workOrder, error } = useQuery(workOrderQueryOptions(workOrderId));
@@ -59,6 +63,7 @@ export function WorkOrderDetailPage() {
           <IntakePhoto workOrderId={workOrder.id} photoId={workOrder.intakePhotoId} notSaved={arrival?.photoNotSaved ?? false} />
         </div>
       </div>
+      {renderEstimate?.({ workOrder, workOrderKey: workOrderQueryOptions(workOrder.id).queryKey })}
     </div>
   );
 }
