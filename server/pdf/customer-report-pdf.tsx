@@ -4,7 +4,7 @@ import { Document, Page, Text, View, renderToBuffer } from "@react-pdf/renderer"
 import type { AppContext } from "../context.ts";
 import { estimates, workOrders } from "../db/schema.ts";
 import { notFound } from "../lib/errors.ts";
-import { customerReport } from "../services/customer-report.ts";
+import { customerReport, type ReportSending } from "../services/customer-report.ts";
 import { Estimate, Fact, Finding, SafetyPanel } from "./report-sections.tsx";
 import { registerFonts, s } from "./report-styles.ts";
 import { reportFileName } from "../../shared/report/customer-report.ts";
@@ -96,11 +96,12 @@ export async function renderCustomerReportPdf(ctx: Pick<AppContext, "db">, workO
   return renderReportPdf(await customerReport(ctx, workOrderId, estimateId), paper);
 }
 
-/** The report of an estimate, ready to attach to the e-mail that sends it. */
+/** The report of an estimate, ready to attach to the e-mail that sends it (shown as sent, when `sending` is given). */
 export async function customerReportAttachment(
   ctx: Pick<AppContext, "db">,
   estimate: { id: string; workOrderId: string },
   paper: PaperSize = "a4",
+  sending?: ReportSending,
 ): Promise<{ filename: string; content: Buffer; contentType: "application/pdf" }> {
   const [row] = await ctx.db
     .select({ number: workOrders.number, revision: estimates.revision })
@@ -108,6 +109,6 @@ export async function customerReportAttachment(
     .innerJoin(workOrders, eq(workOrders.id, estimates.workOrderId))
     .where(and(eq(estimates.id, estimate.id), eq(estimates.workOrderId, estimate.workOrderId)));
   if (!row) throw notFound("This work order has no such estimate.");
-  const content = await renderCustomerReportPdf(ctx, estimate.workOrderId, estimate.id, paper);
+  const content = await renderReportPdf(await customerReport(ctx, estimate.workOrderId, estimate.id, new Date(), sending), paper);
   return { filename: reportFileName(row.number, row.revision), content, contentType: "application/pdf" };
 }

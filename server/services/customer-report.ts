@@ -14,8 +14,14 @@ type Ctx = Pick<AppContext, "db">;
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
+/** An estimate on its way to the customer: the report attached to its e-mail shows it as sent, with its link's expiry. */
+export interface ReportSending {
+  sentAt: Date;
+  validUntil: Date;
+}
+
 /** The named estimate of the work order, or its latest revision that is not superseded; null when it has none. */
-async function reportEstimate(ctx: Ctx, workOrderId: string, estimateId?: string): Promise<ReportEstimateSource | null> {
+async function reportEstimate(ctx: Ctx, workOrderId: string, estimateId?: string, sending?: ReportSending): Promise<ReportEstimateSource | null> {
   let row: EstimateRow | undefined;
   if (estimateId) {
     [row] = await ctx.db.select().from(estimates).where(and(eq(estimates.id, estimateId), eq(estimates.workOrderId, workOrderId)));
@@ -30,10 +36,11 @@ async function reportEstimate(ctx: Ctx, workOrderId: string, estimateId?: string
     if (!row) return null;
   }
   const options = await ctx.db.select().from(estimateOptions).where(eq(estimateOptions.estimateId, row.id)).orderBy(asc(estimateOptions.position));
+  const asSent = sending && (row.status === "draft" || row.status === "sent");
   return {
     id: row.id,
     revision: row.revision,
-    status: row.status,
+    status: asSent ? "sent" : row.status,
     currency: row.currency,
     labourRateCents: row.labourRateCents,
     diagnosticFeeCents: row.diagnosticFeeCents,
@@ -42,8 +49,8 @@ async function reportEstimate(ctx: Ctx, workOrderId: string, estimateId?: string
     taxLabour: row.taxLabour,
     findingTitle: row.findingTitle,
     note: row.note,
-    sentAt: iso(row.sentAt),
-    validUntil: iso(row.validUntil),
+    sentAt: iso(asSent ? sending.sentAt : row.sentAt),
+    validUntil: iso(asSent ? sending.validUntil : row.validUntil),
     decidedAt: iso(row.decidedAt),
     approvedOptionId: row.approvedOptionId,
     options: options.map((o) => ({ id: o.id, position: o.position, title: o.title, labourHours: o.labourHours, parts: o.parts })),
@@ -82,12 +89,13 @@ async function finishedSessions(ctx: Ctx, workOrderId: string): Promise<ReportSe
 /**
  * What the customer is told about their work order: the shop, the unit, the complaint, the findings
  * with their readings, the estimate (the one named, else the latest not superseded), and the safety
- * and warranty notes. Only the customer's name is included of their personal data.
+ * and warranty notes. Only the customer's name is included of their personal data. With `sending`,
+ * the estimate is shown as the e-mail that is going out presents it.
  */
-export async function customerReport(ctx: Ctx, workOrderId: string, estimateId?: string, now = new Date()): Promise<CustomerReport> {
+export async function customerReport(ctx: Ctx, workOrderId: string, estimateId?: string, now = new Date(), sending?: ReportSending): Promise<CustomerReport> {
   const order = await findWorkOrder(ctx, workOrderId);
   const settings = await getSettings(ctx);
-  const [sessions, estimate] = await Promise.all([finishedSessions(ctx, workOrderId), reportEstimate(ctx, workOrderId, estimateId)]);
+  const [sessions, estimate] = await Promise.all([finishedSessions(ctx, workOrderId), reportEstimate(ctx, workOrderId, estimateId, sending)]);
   const { unit } = order;
   return buildCustomerReport({
     generatedAt: now.toISOString(),

@@ -42,6 +42,7 @@ export function estimateMessage(estimate: EstimateView, parts: EstimateMessagePa
     `See every line, and approve or decline, here (valid until ${day(parts.validUntil)}):`,
     parts.link,
     "",
+    "Our report on the work order, with the readings we took, this estimate and the safety and warranty notes, is attached as a PDF.",
     contact ? `Questions? Call or write to us: ${contact}.` : null,
     parts.shop.name,
   ]
@@ -62,6 +63,7 @@ ${estimate.note ? `<p>${escapeHtml(estimate.note)}</p>` : ""}
 <p style="color:#5c5750">Totals include tax.</p>
 <p><a href="${escapeHtml(parts.link)}" style="display:inline-block;background:#2b5f5b;color:#ffffff;padding:14px 24px;border-radius:8px;text-decoration:none;font-weight:bold">See the estimate and answer</a></p>
 <p>Valid until ${escapeHtml(day(parts.validUntil))}. If the button does not work, open this address: ${escapeHtml(parts.link)}</p>
+<p>Our report on the work order, with the readings we took, this estimate and the safety and warranty notes, is attached as a PDF.</p>
 ${contact ? `<p>Questions? Call or write to us: ${escapeHtml(contact)}.</p>` : ""}
 <p>${escapeHtml(parts.shop.name)}</p>
 </body></html>`;

@@ -75,7 +75,7 @@ export async function sendEstimate(ctx: AppContext, user: PublicUser, id: string
     ...message,
     fromName: settings.name,
     replyTo: settings.email || undefined,
-    attachments: await estimateMailAttachments(ctx, view),
+    attachments: await estimateMailAttachments(ctx, view, expiresAt),
     recordType: "estimate",
     recordId: id,
     createdBy: user.id,

@@ -1,6 +1,7 @@
 import net from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
+import { simpleParser } from "mailparser";
 import { createTestApp, type TestApp } from "../helpers/test-app.ts";
 import { signedInAs } from "../helpers/sign-in.ts";
 import { seedDemo } from "../../../server/db/seed/demo.ts";
@@ -11,6 +12,8 @@ import { loadEnv } from "../../../server/env.ts";
 import { createLogger } from "../../../server/lib/logger.ts";
 import { installBuiltInFlows } from "../../../server/services/flows.ts";
 import { lastMailTo, linkToken, pricedCarbOptions, workOrderWithFinding } from "./helpers.ts";
+import { readPdf } from "../report/pdf-text.ts";
+import { formatDay } from "../../../shared/report/dates.ts";
 import type { EstimateView, SendEstimateResponse } from "../../../shared/schemas/estimates.ts";
 
 async function closedPort(): Promise<number> {
@@ -66,7 +69,20 @@ describe("sending through the built-in sink", () => {
     const token = linkToken(mail!.textBody);
     expect(mail!.textBody).toContain(`http://bench.test/estimate/${token}`);
     expect(mail!.htmlBody).toContain(`http://bench.test/estimate/${token}`);
-    expect(mail!.attachments).toEqual([]);
+    // The customer report rides along as a PDF: Letter for this imperial shop, the estimate shown as sent.
+    const pdfName = `customer-report-wo-${wo!.number}-estimate-1.pdf`;
+    expect(mail!.attachments).toEqual([{ filename: pdfName, contentType: "application/pdf", size: expect.any(Number) }]);
+    const parsed = await simpleParser(Buffer.from(mail!.raw, "base64"));
+    const pages = await readPdf(parsed.attachments[0]!.content);
+    // Source: ANSI/ASME Y14.1 Letter is 8.5 x 11 in = 612 x 792 pt.
+    expect(pages[0]!.size).toEqual([612, 792]);
+    const text = pages.map((p) => p.text).join(" ");
+    expect(text).toContain(`WO ${wo!.number}`);
+    expect(text).toContain("Sent, waiting for your answer");
+    expect(text).toContain(formatDay(body.estimate.validUntil!));
+    expect(text).toContain("$168.20");
+    expect(text).toContain("$120.53");
+    expect(mail!.textBody).toContain("is attached as a PDF");
 
     // Only the hash is stored; the raw token is in no table of the shop's own (the sink's copy of the e-mail aside).
     const links = await t.ctx.db.select().from(estimateLinks).where(eq(estimateLinks.estimateId, estimate.id));
