@@ -124,17 +124,17 @@ describe("the review queue", () => {
     expect(screen.getByText("Page 1 of 3")).toBeInTheDocument();
     expect(screen.getByRole("button", { name: "Previous page" })).toBeDisabled();
     await user.click(screen.getByRole("button", { name: "Next page" }));
-    expect(await screen.findByText("26–50 of 60 sessions")).toBeInTheDocument();
+    expect(await screen.findByText("26–50 of 60 sessions", {}, { timeout: 5000 })).toBeInTheDocument();
     expect(paramsOf(router.state.location.search)).toEqual({ page: "2" });
     expect(await screen.findByRole("link", { name: "WO 1125" })).toBeInTheDocument();
     await user.click(screen.getByRole("button", { name: "Next page" }));
-    expect(await screen.findByText("51–60 of 60 sessions")).toBeInTheDocument();
+    expect(await screen.findByText("51–60 of 60 sessions", {}, { timeout: 5000 })).toBeInTheDocument();
     expect(screen.getByRole("button", { name: "Next page" })).toBeDisabled();
     await user.click(screen.getByRole("button", { name: "Previous page" }));
-    expect(await screen.findByText("26–50 of 60 sessions")).toBeInTheDocument();
+    expect(await screen.findByText("26–50 of 60 sessions", {}, { timeout: 5000 })).toBeInTheDocument();
     await user.selectOptions(screen.getByRole("combobox", { name: "Rows a page" }), "50");
     await waitFor(() => expect(paramsOf(router.state.location.search)).toEqual({ page: "1", pageSize: "50" }));
-    expect(await screen.findByText("1–50 of 60 sessions")).toBeInTheDocument();
+    expect(await screen.findByText("1–50 of 60 sessions", {}, { timeout: 5000 })).toBeInTheDocument();
     expect(seen.map(paramsOf)).toEqual([{ page: "1" }, { page: "2" }, { page: "3" }, { page: "2" }, { page: "1", pageSize: "50" }]);
   });
 
