@@ -1,7 +1,7 @@
-import net from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { simpleParser } from "mailparser";
+import { closedPort } from "../helpers/closed-port.ts";
 import { createTestApp, type TestApp } from "../helpers/test-app.ts";
 import { signedInAs } from "../helpers/sign-in.ts";
 import { seedDemo } from "../../../server/db/seed/demo.ts";
@@ -15,14 +15,6 @@ import { lastMailTo, linkToken, pricedCarbOptions, workOrderWithFinding } from "
 import { readPdf } from "../report/pdf-text.ts";
 import { formatDay } from "../../../shared/report/dates.ts";
 import type { EstimateView, SendEstimateResponse } from "../../../shared/schemas/estimates.ts";
-
-async function closedPort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 async function readyApp(env: Record<string, string> = {}) {
   const app = await createTestApp(env);

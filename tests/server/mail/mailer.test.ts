@@ -1,4 +1,3 @@
-import net from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { simpleParser } from "mailparser";
@@ -6,6 +5,7 @@ import { capturedMail, outgoingMail } from "../../../server/db/schema.ts";
 import { createMailer } from "../../../server/mail/mailer.ts";
 import { loadEnv } from "../../../server/env.ts";
 import { createLogger } from "../../../server/lib/logger.ts";
+import { closedPort } from "../helpers/closed-port.ts";
 import { createTestApp, type TestApp } from "../helpers/test-app.ts";
 import { signedInAs } from "../helpers/sign-in.ts";
 
@@ -14,15 +14,6 @@ beforeAll(async () => {
   t = await createTestApp();
 });
 afterAll(() => t.close());
-
-/** A port nothing listens on: bound, read, then closed. */
-async function closedPort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}
 
 /** A stand-in for the estimate PDF: only its first line matters to these tests. */
 const standInPdf = Buffer.from("%PDF-1.4\n% a tiny stand-in body\n%%EOF\n");

@@ -1,7 +1,6 @@
 import type { BoardResponse, BoardTicket } from "../../../../shared/schemas/board.ts";
 import type { WorkOrderState } from "../../../../shared/schemas/work-orders.ts";
-import { StatePill } from "../../../components/ui/state-pill.tsx";
-import { stateLabel, stateShapes } from "../lib/board-words.ts";
+import { WorkOrderStateLabel } from "../../../components/ui/work-order-state-label.tsx";
 import { TicketCard } from "./ticket-card.tsx";
 
 type Column = BoardResponse["columns"][number];
@@ -22,7 +21,7 @@ export function BoardColumn({ column, canMove, movingId, onMove }: BoardColumnPr
     <section id={columnId(column.state)} aria-labelledby={headingId} className="flex w-72 shrink-0 scroll-ml-2 flex-col rounded-xl bg-sunken">
       {/* Sticks to the top of the board while its cards scroll under it. */}
       <h2 id={headingId} className="sticky top-0 z-10 flex items-center justify-between gap-2 rounded-t-xl border-b-2 border-line bg-sunken px-3 py-3 text-lg">
-        <StatePill shape={stateShapes[column.state]}>{stateLabel(column.state)}</StatePill>
+        <WorkOrderStateLabel state={column.state} />
         <span className="tabular-figures font-semibold" aria-label={`${column.total} ${column.total === 1 ? "work order" : "work orders"}`}>
           {column.total}
         </span>

@@ -1,6 +1,5 @@
 import { equipmentKindLabels, type EquipmentKind } from "../../../../shared/equipment.ts";
 import { workOrderStateLabels, type WorkOrderState } from "../../../../shared/schemas/work-orders.ts";
-import type { StateShape } from "../../../components/ui/state-pill.tsx";
 
 export const ticketNumber = (number: number) => `WO ${number}`;
 export const ticketPath = (id: string) => `/work-orders/${encodeURIComponent(id)}`;
@@ -10,19 +9,6 @@ export function unitWords({ make, model, equipmentKind }: { make: string; model:
   return `${make} ${model} ${equipmentKindLabels[equipmentKind].toLowerCase()}`;
 }
 
-/** The same shapes the work-order screens use, so a state looks alike everywhere. */
-export const stateShapes: Record<WorkOrderState, StateShape> = {
-  waiting_for_diagnosis: "waiting",
-  diagnosing: "working",
-  waiting_for_approval: "waiting",
-  approved: "yes",
-  declined: "no",
-  waiting_for_parts: "waiting",
-  in_repair: "working",
-  test_run: "working",
-  ready_for_pickup: "ready",
-  picked_up: "gone",
-};
 
 const minute = 60;
 const hour = 60 * minute;

@@ -10,7 +10,7 @@ import type { IntakeArrival } from "./intake-form.tsx";
 import { IntakePhoto } from "./intake-photo.tsx";
 import { SessionList } from "./session-list.tsx";
 import { StartCheck } from "./start-check.tsx";
-import { StateLabel } from "./state-label.tsx";
+import { WorkOrderStateLabel } from "../../../components/ui/work-order-state-label.tsx";
 import { TestRunChecklist } from "./test-run-checklist.tsx";
 import { WorkOrderFacts } from "./work-order-facts.tsx";
 
@@ -42,7 +42,7 @@ export function WorkOrderDetailPage({ renderEstimate }: { renderEstimate?: Rende
           {unitName(workOrder)}
         </h1>
         <div className="flex flex-wrap items-center gap-3">
-          <StateLabel state={workOrder.state} />
+          <WorkOrderStateLabel state={workOrder.state} />
           <span>for {workOrder.customer.name}</span>
         </div>
         <Link to={`/work-orders/${encodeURIComponent(workOrder.id)}/report`} className="inline-flex min-h-12 items-center self-start font-semibold text-accent underline decoration-2 underline-offset-4">

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { Link } from "react-router";
 import type { WorkOrderSummary } from "../../../../shared/schemas/work-orders.ts";
 import { ageInShop, unitName, workOrderNumber, workOrderPath } from "../lib/work-order-words.ts";
-import { StateLabel } from "./state-label.tsx";
+import { WorkOrderStateLabel } from "../../../components/ui/work-order-state-label.tsx";
 
 /** Work orders as big rows: the whole row opens the work order. */
 export function WorkOrderRows({ workOrders }: { workOrders: WorkOrderSummary[] }) {
@@ -23,7 +23,7 @@ export function WorkOrderRows({ workOrders }: { workOrders: WorkOrderSummary[] }
               <span className="truncate text-base text-ink-muted">“{order.complaint}”</span>
             </span>
             <span className="flex flex-col items-start gap-1 landscape:items-end portrait:col-start-2">
-              <StateLabel state={order.state} />
+              <WorkOrderStateLabel state={order.state} />
               <span className="text-base text-ink-muted tabular-figures">{ageInShop(order.createdAt, now)}</span>
             </span>
           </Link>

@@ -1,5 +1,5 @@
-import { workOrderStateLabels, type WorkOrderState } from "../../../../shared/schemas/work-orders.ts";
-import { StatePill, type StateShape } from "../../../components/ui/state-pill.tsx";
+import { workOrderStateLabels, type WorkOrderState } from "../../../shared/schemas/work-orders.ts";
+import { StatePill, type StateShape } from "./state-pill.tsx";
 
 const shapes: Record<WorkOrderState, StateShape> = {
   waiting_for_diagnosis: "waiting",
@@ -15,7 +15,7 @@ const shapes: Record<WorkOrderState, StateShape> = {
 };
 
 /** A work order's state as a word with a shape beside it, so it never rests on colour. */
-export function StateLabel({ state }: { state: WorkOrderState }) {
+export function WorkOrderStateLabel({ state }: { state: WorkOrderState }) {
   return (
     <StatePill shape={shapes[state]} className="whitespace-nowrap">
       {workOrderStateLabels[state]}
