@@ -1,7 +1,7 @@
 // The parts of the customer report's PDF: facts, a finding with its readings, the estimate, a safety panel.
 import { Circle, Path, Rect, Svg, Text, View } from "@react-pdf/renderer";
 import { formatDay } from "../../shared/report/dates.ts";
-import { formatMoney } from "../../shared/report/money.ts";
+import { formatMoney } from "../../shared/calc/money.ts";
 import { lineQuantity, optionTotalRows, readingText } from "../../shared/report/words.ts";
 import type { ReportEstimate, ReportFinding, ReportSafetyNote } from "../../shared/schemas/report.ts";
 import { bands, s } from "./report-styles.ts";

@@ -1,5 +1,6 @@
 // The words of the estimate e-mail, as plain text and as simple HTML that reads on a phone.
 import { equipmentKindLabels } from "../../shared/equipment.ts";
+import { formatMoney } from "../../shared/calc/money.ts";
 import type { EstimateView } from "../../shared/schemas/estimates.ts";
 
 export interface EstimateMessageParts {
@@ -9,10 +10,6 @@ export interface EstimateMessageParts {
   customerName: string;
   link: string;
   validUntil: Date;
-}
-
-export function formatMoney(cents: number, currency: string): string {
-  return new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
 }
 
 const entities: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };

@@ -24,7 +24,7 @@ export function pricedOption(row: EstimateRow, option: Pick<EstimateOptionRow, "
   const { lines: _lines, taxableCents: _taxable, ...totals } = estimate;
   const weighed =
     row.replacementPriceCents !== null && row.replacementPriceCents > 0
-      ? repairOrReplace({ repairCents: estimate.totalCents, replacementCents: row.replacementPriceCents, thresholdPercent: row.replaceThresholdPercent })
+      ? repairOrReplace({ repairCents: estimate.totalCents, replacementCents: row.replacementPriceCents, thresholdPercent: row.replaceThresholdPercent, currency: row.currency })
       : null;
   return {
     id: option.id,

@@ -1,4 +1,5 @@
 // Estimates in integer minor units (cents); all rounding happens in integer arithmetic.
+import { formatMoney } from "./money.ts";
 
 /** Quantities and labour hours may carry this many decimal places (fuel line by the metre, labour by the tenth hour). */
 export const QUANTITY_DECIMALS = 3;
@@ -113,12 +114,14 @@ function money(cents: number): string {
   return `${Math.floor(cents / 100)}.${String(cents % 100).padStart(2, "0")}`;
 }
 
-export function repairOrReplace(input: { repairCents: number; replacementCents: number; thresholdPercent?: number }): {
+/** With `currency`, the sentence gives both amounts in it ("$13.33"); without, as plain figures. */
+export function repairOrReplace(input: { repairCents: number; replacementCents: number; thresholdPercent?: number; currency?: string }): {
   sharePercent: number;
   recommendation: "repair" | "consider_replacing";
   sentence: string;
 } {
-  const { repairCents, replacementCents, thresholdPercent = DEFAULT_REPLACE_THRESHOLD_PERCENT } = input;
+  const { repairCents, replacementCents, thresholdPercent = DEFAULT_REPLACE_THRESHOLD_PERCENT, currency } = input;
+  const amount = (cents: number) => (currency ? formatMoney(cents, currency) : money(cents));
   requireCents(repairCents, "The repair cost");
   requireCents(replacementCents, "The replacement price");
   if (replacementCents === 0) throw new RangeError("The replacement price must be above zero.");
@@ -133,7 +136,7 @@ export function repairOrReplace(input: { repairCents: number; replacementCents: 
   return {
     sharePercent,
     recommendation: replace ? "consider_replacing" : "repair",
-    sentence: `The repair (${money(repairCents)}) is ${shown} % of a new unit (${money(replacementCents)}): ${tail}`,
+    sentence: `The repair (${amount(repairCents)}) is ${shown} % of a new unit (${amount(replacementCents)}): ${tail}`,
   };
 }
 

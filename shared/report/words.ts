@@ -1,6 +1,6 @@
 // The report's figures as text, said once for the print page and the PDF.
 import type { CustomerReport, ReportLine, ReportOption, ReportReading } from "../schemas/report.ts";
-import { formatMoney, formatQuantity, formatRate } from "./money.ts";
+import { formatMoney, formatQuantity, formatRate } from "../calc/money.ts";
 
 const figure = (n: number) => String(Number(n.toPrecision(4)));
 

@@ -65,7 +65,7 @@ describe("the estimate builder", () => {
 
     await user.type(screen.getByLabelText(/Price of a new unit/), "40");
     // 21.83 / 40.00 = 54.575 %, shown cut to the tenth as 54.5 %: at or above the 50 % line. Source: /work/shared/trade.md, the 50 % rule of thumb.
-    expect(within(option(1)).getByText("The repair (21.83) is 54.5 % of a new unit (40.00): at or above the 50 % line, so consider replacing it.")).toBeInTheDocument();
+    expect(within(option(1)).getByText("The repair ($21.83) is 54.5 % of a new unit ($40.00): at or above the 50 % line, so consider replacing it.")).toBeInTheDocument();
   });
 
   it("refuses a negative quantity and price beside their fields, withholds the total and saves nothing", async () => {

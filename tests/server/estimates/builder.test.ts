@@ -88,8 +88,8 @@ describe("pricing the options", () => {
     // Against a new unit at 300.00: 168.20 / 300.00 = 56.07 % (shown to the tenth, cut down: 56.0), at or above 50 %;
     // 120.53 / 300.00 = 40.18 % → 40.1, under it.
     // Source: /work/shared/trade.md — replace when the repair is 50 % or more of a new unit (one rule of thumb).
-    expect(rebuild!.repairOrReplace).toEqual({ recommendation: "consider_replacing", sentence: "The repair (168.20) is 56.0 % of a new unit (300.00): at or above the 50 % line, so consider replacing it." });
-    expect(replace!.repairOrReplace).toEqual({ recommendation: "repair", sentence: "The repair (120.53) is 40.1 % of a new unit (300.00): under the 50 % line, so repair it." });
+    expect(rebuild!.repairOrReplace).toEqual({ recommendation: "consider_replacing", sentence: "The repair ($168.20) is 56.0 % of a new unit ($300.00): at or above the 50 % line, so consider replacing it." });
+    expect(replace!.repairOrReplace).toEqual({ recommendation: "repair", sentence: "The repair ($120.53) is 40.1 % of a new unit ($300.00): under the 50 % line, so repair it." });
   });
 
   it("rounds a part sold by the metre to the cent, half away from zero", async () => {

@@ -4,7 +4,7 @@ import { signedInAs } from "../helpers/sign-in.ts";
 import { installBuiltInFlows } from "../../../server/services/flows.ts";
 import { customerReportAttachment, renderCustomerReportPdf } from "../../../server/pdf/customer-report-pdf.tsx";
 import { optionTotals } from "../../../shared/calc/estimate.ts";
-import { formatMoney } from "../../../shared/report/money.ts";
+import { formatMoney } from "../../../shared/calc/money.ts";
 import { finishedWorkOrder, insertEstimate, seedShop, SHOP, wornRingOptions } from "./report-fixtures.ts";
 import { readPdf, type PdfPage } from "./pdf-text.ts";
 

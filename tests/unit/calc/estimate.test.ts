@@ -107,6 +107,13 @@ describe("repairOrReplace", () => {
     expect(r.sentence).toContain("49.9 %");
   });
 
+  it("says both amounts in the estimate's currency when it is given", () => {
+    // Source: ISO 4217 (via ICU): USD and EUR have two minor digits, JPY none.
+    expect(repairOrReplace({ repairCents: 1333, replacementCents: 24900, currency: "USD" }).sentence).toBe("The repair ($13.33) is 5.3 % of a new unit ($249.00): under the 50 % line, so repair it.");
+    expect(repairOrReplace({ repairCents: 1333, replacementCents: 24900, currency: "EUR" }).sentence).toContain("(€13.33)");
+    expect(repairOrReplace({ repairCents: 13330, replacementCents: 24900, currency: "JPY" }).sentence).toContain("(¥13,330)");
+  });
+
   it("honours a shop's own threshold", () => {
     expect(repairOrReplace({ repairCents: 15000, replacementCents: 25000, thresholdPercent: 75 }).recommendation).toBe("repair");
     expect(() => repairOrReplace({ repairCents: 1, replacementCents: 0 })).toThrow(RangeError);

@@ -96,7 +96,7 @@ export interface OptionFigures {
 }
 
 /** One option's live totals, or null while one of its fields does not read. */
-export function optionFigures(estimate: Pick<EstimateView, "rates" | "replaceThresholdPercent">, option: OptionDraft, replacementPrice: string): OptionFigures {
+export function optionFigures(estimate: Pick<EstimateView, "rates" | "replaceThresholdPercent" | "currency">, option: OptionDraft, replacementPrice: string): OptionFigures {
   const hours = parseAmount(option.labourHours, "labour hours");
   const parts = option.parts.map((p) => ({ description: p.description.trim(), partNumber: p.partNumber.trim(), quantity: parseAmount(p.quantity, "quantity"), price: parsePrice(p.price) }));
   if (hours.error !== undefined || parts.some((p) => p.quantity.error !== undefined || p.price.error !== undefined || p.description === "" || (p.quantity.value ?? 0) <= 0)) {
@@ -111,7 +111,7 @@ export function optionFigures(estimate: Pick<EstimateView, "rates" | "replaceThr
   const replacement = replacementPrice.trim() === "" ? null : parsePrice(replacementPrice);
   const sentence =
     replacement?.value !== undefined && replacement.value > 0
-      ? repairOrReplace({ repairCents: totals.totalCents, replacementCents: replacement.value, thresholdPercent: estimate.replaceThresholdPercent }).sentence
+      ? repairOrReplace({ repairCents: totals.totalCents, replacementCents: replacement.value, thresholdPercent: estimate.replaceThresholdPercent, currency: estimate.currency }).sentence
       : null;
   return { totals, sentence };
 }

@@ -1,7 +1,4 @@
-/** Cents as the customer reads them: $168.20, with the estimate's own currency. */
-export function formatMoney(cents: number, currency: string): string {
-  return new Intl.NumberFormat("en-US", { style: "currency", currency }).format(cents / 100);
-}
+export { formatMoney } from "../../../../shared/calc/money.ts";
 
 export type Parsed = { value: number; error?: undefined } | { value?: undefined; error: string };
 

@@ -1,5 +1,5 @@
 import { formatDay } from "../../../../shared/report/dates.ts";
-import { formatMoney } from "../../../../shared/report/money.ts";
+import { formatMoney } from "../../../../shared/calc/money.ts";
 import { lineQuantity, optionTotalRows } from "../../../../shared/report/words.ts";
 import type { ReportEstimate, ReportOption } from "../../../../shared/schemas/report.ts";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatMoney, formatQuantity, formatRate } from "../../../shared/report/money.ts";
+import { formatMoney, formatQuantity, formatRate } from "../../../shared/calc/money.ts";
 import { safetyNotesFor } from "../../../shared/report/safety.ts";
 
 describe("the report's money and figures", () => {
