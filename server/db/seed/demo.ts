@@ -23,6 +23,7 @@ export const demoShop = {
   currency: "USD",
   defaultUnitSystem: "imperial" as const,
   altitudeM: 410,
+  warrantyNote: "Repairs are guaranteed for 90 days on parts and labour from the day you collect the unit. Wear parts (line, chains, blades, plugs) and damage from fuel left in over the season are not covered.",
 };
 
 export const demoUsers: { email: string; name: string; role: Role; password: string }[] = [

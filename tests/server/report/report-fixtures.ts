@@ -9,22 +9,11 @@ import { appendRequests, gatedEvents, type Move } from "../../factories/session-
 import { buildWorkOrder } from "../../factories/work-orders.ts";
 import type { TestApp } from "../helpers/test-app.ts";
 import type { signedInAs } from "../helpers/sign-in.ts";
+import { demoShop } from "../../../server/db/seed/demo.ts";
 import type { EstimatePartLine } from "../../../shared/schemas/estimate-records.ts";
 
-export const SHOP = {
-  name: "Kettle Creek Mower & Saw",
-  phone: "555-0142",
-  email: "desk@kettlecreek.example",
-  address: "14 Mill Race Road, Kettle Creek",
-  labourRateCents: 8500,
-  diagnosticFeeCents: 4500,
-  creditDiagnosticFee: true,
-  taxRateBasisPoints: 725,
-  currency: "USD",
-  defaultUnitSystem: "imperial" as const,
-  altitudeM: 0,
-  warrantyNote: "Repairs are guaranteed for 90 days on parts and labour from the day you collect the unit.",
-};
+/** The demo shop at sea level, so readings stand as taken. */
+export const SHOP = { ...demoShop, altitudeM: 0 };
 
 export async function seedShop(db: Database) {
   await db.insert(shopSettings).values({ id: 1, ...SHOP });
