@@ -98,8 +98,8 @@ describe("an estimate from the bench to the customer's approval", () => {
     // Common practice (no published source): tax on the parts only, rounded once to the cent; the demo shop's rates.
     await expect.poll(() => first.getByTestId("option-total").innerText()).toBe("$13.33");
     await expect.poll(() => second.getByTestId("option-total").innerText()).toBe("$71.38");
-    // 71.38 / 249.00 = 28.67 %, under half. Source: /work/shared/trade.md, the 50 % rule of thumb.
-    await seen(second.getByText("The repair (71.38) is 28.6 % of a new unit (249.00): under the 50 % line, so repair it."), "the repair-or-replace sentence");
+    // 71.38 / 249.00 = 28.67 %, under half. Common practice (consumer advice, no published source): the 50 % rule of thumb.
+    await seen(second.getByText("The repair ($71.38) is 28.6 % of a new unit ($249.00): under the 50 % line, so repair it."), "the repair-or-replace sentence");
     await page.getByRole("heading", { level: 2, name: "Estimate" }).scrollIntoViewIfNeeded();
     await settled(page);
     await snap(page, "estimate-builder-landscape");

@@ -64,7 +64,7 @@ describe("the estimate builder", () => {
     expect(within(option(1)).getByText("Tax, 7.25 % on parts").nextSibling).toHaveTextContent("$0.33");
 
     await user.type(screen.getByLabelText(/Price of a new unit/), "40");
-    // 21.83 / 40.00 = 54.575 %, shown cut to the tenth as 54.5 %: at or above the 50 % line. Source: /work/shared/trade.md, the 50 % rule of thumb.
+    // 21.83 / 40.00 = 54.575 %, shown cut to the tenth as 54.5 %: at or above the 50 % line. Common practice (consumer advice, no published source): the 50 % rule of thumb.
     expect(within(option(1)).getByText("The repair ($21.83) is 54.5 % of a new unit ($40.00): at or above the 50 % line, so consider replacing it.")).toBeInTheDocument();
   });
 

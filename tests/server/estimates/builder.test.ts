@@ -79,7 +79,7 @@ describe("pricing the options", () => {
     // subtotal 37.95 + 127.50 + 45.00 − 45.00 = 165.45; tax 7.25 % of the parts only: 37.95 × 0.0725 = 2.751375 → 2.75;
     // total 165.45 + 2.75 = 168.20.
     // Common practice (no published source): tax on separately stated parts only, rounded once, half away from zero.
-    // Source: /work/shared/trade.md — the diagnostic fee is often credited toward an approved repair.
+    // Common practice (no published source): the diagnostic fee is often credited toward an approved repair.
     expect(rebuild!.totals).toEqual({ partsCents: 3795, labourCents: 12750, diagnosticFeeCents: 4500, diagnosticCreditCents: 4500, subtotalCents: 16545, taxCents: 275, totalCents: 16820 });
     // Replace: parts 38.99 + 3.49 + 6.50 = 48.98; labour 0.8 h × 85.00 = 68.00; fee and credit cancel;
     // subtotal 116.98; tax 48.98 × 0.0725 = 3.55105 → 3.55; total 120.53.
@@ -87,7 +87,7 @@ describe("pricing the options", () => {
 
     // Against a new unit at 300.00: 168.20 / 300.00 = 56.07 % (shown to the tenth, cut down: 56.0), at or above 50 %;
     // 120.53 / 300.00 = 40.18 % → 40.1, under it.
-    // Source: /work/shared/trade.md — replace when the repair is 50 % or more of a new unit (one rule of thumb).
+    // Common practice (consumer advice, no published source): replace when the repair is 50 % or more of a new unit.
     expect(rebuild!.repairOrReplace).toEqual({ recommendation: "consider_replacing", sentence: "The repair ($168.20) is 56.0 % of a new unit ($300.00): at or above the 50 % line, so consider replacing it." });
     expect(replace!.repairOrReplace).toEqual({ recommendation: "repair", sentence: "The repair ($120.53) is 40.1 % of a new unit ($300.00): under the 50 % line, so repair it." });
   });
