@@ -6,7 +6,7 @@ import type { AppContext } from "../context.ts";
 import { customers, units, users, workOrders, workOrderStateHistory, workOrderTestRuns } from "../db/schema.ts";
 import { conflict, notFound } from "../lib/errors.ts";
 import { recordAudit } from "./audit.ts";
-import { moveWorkOrder } from "./work-orders.ts";
+import { moveWorkOrder, summaryColumns } from "./work-orders.ts";
 import { allowedMoves, canMove, needsPassedTestRun, testRunPassed } from "../../shared/work-orders/moves.ts";
 import { workOrderStateLabels, workOrderStates, type WorkOrderState } from "../../shared/schemas/work-orders.ts";
 import type { BoardResponse, BoardTicket, MoveWorkOrderRequest, MoveWorkOrderResponse } from "../../shared/schemas/board.ts";
@@ -16,16 +16,8 @@ import type { PublicUser } from "../../shared/schemas/users.ts";
 /** Picked-up tickets are history: the board shows only the latest few. */
 export const PICKED_UP_SHOWN = 10;
 
-const ticketColumns = {
-  id: workOrders.id,
-  number: workOrders.number,
-  state: workOrders.state,
-  customerName: customers.name,
-  equipmentKind: units.equipmentKind,
-  make: units.make,
-  model: units.model,
-  updatedAt: workOrders.updatedAt,
-};
+// The summary's columns but the complaint; updatedAt stands in for a ticket with no history row.
+const { complaint: _complaint, createdAt: _createdAt, ...ticketColumns } = summaryColumns;
 
 /** Each work order's latest history row: when it entered its state and who moved it there. */
 async function lastMoves(ctx: Pick<AppContext, "db">, ids: string[]) {

@@ -1,7 +1,6 @@
 // The work-order board: every open ticket by state, and moving one on by hand.
 import { z } from "zod";
-import { equipmentKinds } from "../equipment.ts";
-import { workOrderStates } from "./work-orders.ts";
+import { workOrderStates, workOrderSummarySchema } from "./work-orders.ts";
 
 export const moveWorkOrderRequestSchema = z.object({
   to: z.enum(workOrderStates, { error: "Choose the state to move the work order to." }),
@@ -12,14 +11,8 @@ export type MoveWorkOrderRequest = z.infer<typeof moveWorkOrderRequestSchema>;
 
 const who = z.object({ id: z.string(), name: z.string() }).nullable();
 
-export const boardTicketSchema = z.object({
-  id: z.string(),
-  number: z.number().int(),
-  state: z.enum(workOrderStates),
-  customerName: z.string(),
-  equipmentKind: z.enum(equipmentKinds),
-  make: z.string(),
-  model: z.string(),
+/** A ticket: the work order's summary without the complaint, and how long it has been in its state. */
+export const boardTicketSchema = workOrderSummarySchema.pick({ id: true, number: true, state: true, customerName: true, equipmentKind: true, make: true, model: true }).extend({
   /** When the ticket entered its state, and who moved it there. */
   movedAt: z.string(),
   movedBy: who,
