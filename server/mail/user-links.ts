@@ -1,7 +1,7 @@
 // The e-mails that carry a one-time password link: an invitation to join the shop, or a reset.
+import { escapeHtml } from "./escape-html.ts";
 import type { OutgoingMessage } from "./mailer.ts";
 
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 interface LinkMail {
   to: string;
@@ -15,10 +15,10 @@ interface LinkMail {
 function html(lines: string[], link: string, button: string, after: string): string {
   return [
     `<div style="font-family: sans-serif; font-size: 16px; line-height: 1.5; color: #222">`,
-    ...lines.map((l) => `<p>${escape(l)}</p>`),
-    `<p><a href="${escape(link)}" style="display: inline-block; padding: 12px 20px; background: #1f5f5b; color: #fff; text-decoration: none; border-radius: 6px; font-weight: bold">${escape(button)}</a></p>`,
-    `<p style="font-size: 14px; color: #555">Or copy this address into the browser: ${escape(link)}</p>`,
-    `<p style="font-size: 14px; color: #555">${escape(after)}</p>`,
+    ...lines.map((l) => `<p>${escapeHtml(l)}</p>`),
+    `<p><a href="${escapeHtml(link)}" style="display: inline-block; padding: 12px 20px; background: #1f5f5b; color: #fff; text-decoration: none; border-radius: 6px; font-weight: bold">${escapeHtml(button)}</a></p>`,
+    `<p style="font-size: 14px; color: #555">Or copy this address into the browser: ${escapeHtml(link)}</p>`,
+    `<p style="font-size: 14px; color: #555">${escapeHtml(after)}</p>`,
     `</div>`,
   ].join("\n");
 }

@@ -1,5 +1,6 @@
 // The words of the estimate e-mail, as plain text and as simple HTML that reads on a phone.
 import { equipmentKindLabels } from "../../shared/equipment.ts";
+import { escapeHtml } from "../mail/escape-html.ts";
 import { formatMoney } from "../../shared/calc/money.ts";
 import type { EstimateView } from "../../shared/schemas/estimates.ts";
 
@@ -12,8 +13,6 @@ export interface EstimateMessageParts {
   validUntil: Date;
 }
 
-const entities: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
-const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => entities[c]!);
 const day = (d: Date) => new Intl.DateTimeFormat("en-US", { year: "numeric", month: "long", day: "numeric", timeZone: "UTC" }).format(d);
 
 export function estimateSubject(parts: EstimateMessageParts): string {
